@@ -1,0 +1,5 @@
+namespace CanopyAdvisor.Cli;
+internal static class Program
+{
+    private static int Main(string[] args) => args.Length >= 0 ? 0 : 1;
+}

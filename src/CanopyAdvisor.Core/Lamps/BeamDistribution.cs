@@ -1,0 +1,18 @@
+namespace CanopyAdvisor.Core.Lamps;
+
+/// <summary>How a lamp spreads its output over directions: intensity per unit emitted flux, sr⁻¹.</summary>
+/// <remarks>
+/// Directions are given in the lamp's own frame: <c>polar</c> is the angle from the optical axis (0 on axis, π
+/// straight back), <c>around</c> the angle about the axis from the photometric reference direction (IES C = 0°),
+/// counter-clockwise when looking against the beam (from below for a downward lamp, as IES type C).
+/// Implementations are normalised so that the integral over the sphere is 1; multiply by the lamp's photon flux
+/// to get µmol s⁻¹ sr⁻¹. Implementations are immutable and safe to share between threads.
+/// </remarks>
+public abstract class BeamDistribution
+{
+    /// <summary>Intensity per unit flux, sr⁻¹, toward a direction given by its polar angle and angle about the axis (radians).</summary>
+    public abstract double IntensityPerUnitFlux(double polarRadians, double aroundRadians);
+
+    /// <summary>True when the intensity does not depend on the angle about the axis.</summary>
+    public abstract bool IsAxiallySymmetric { get; }
+}

@@ -1,0 +1,33 @@
+namespace CanopyAdvisor.Core;
+
+/// <summary>Every physical and conventional constant of the model, in one place, each with value, unit and source.</summary>
+/// <remarks>Add a constant here rather than writing a number twice. Values marked "from memory" were not verified.</remarks>
+public static class ModelConstants
+{
+    /// <summary>Solar constant, 1367 W m⁻²: the value used by Ineichen &amp; Perez (2002) and by Duffie &amp; Beckman (WRC 1981 value).</summary>
+    public const double SolarConstantWattsPerSquareMetre = 1367.0;
+
+    /// <summary>Photon content of daylight PAR, 4.57 µmol J⁻¹ (Thimijan &amp; Heins 1983, HortScience 18:818, table for sunlight).</summary>
+    public const double DaylightMicromolesPerJoulePar = 4.57;
+
+    /// <summary>Illuminance of daylight per unit PPFD, 54 lux per µmol m⁻² s⁻¹ (Thimijan &amp; Heins 1983).</summary>
+    public const double DaylightLuxPerMicromolePerSquareMetreSecond = 54.0;
+
+    /// <summary>
+    /// Fraction of global shortwave irradiance that is PAR (400–700 nm), 0.47 (measured ratios of 0.454 and 0.473
+    /// are published, MODEL.md §1.4; 0.47 is a rounded mid value, common practice).
+    /// </summary>
+    public const double ParFractionOfGlobal = 0.47;
+
+    /// <summary>R:FR of direct sunlight, 1.14 (Smith 1982 definition; common practice quote for direct sun).</summary>
+    public const double SunlightRedToFarRed = 1.14;
+
+    /// <summary>Seconds per hour.</summary>
+    public const double SecondsPerHour = 3600.0;
+
+    /// <summary>Micromoles per mole.</summary>
+    public const double MicromolesPerMole = 1e6;
+
+    /// <summary>G-function of a spherical leaf-angle distribution, 0.5 (Ross 1981; Monsi &amp; Saeki 1953 extinction).</summary>
+    public const double SphericalLeafProjection = 0.5;
+}

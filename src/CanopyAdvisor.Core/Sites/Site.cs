@@ -1,0 +1,29 @@
+using System.Collections.Immutable;
+using NodaTime;
+
+namespace CanopyAdvisor.Core.Sites;
+
+/// <summary>One location a grower runs: where it is, its time zone, its structure, benches, lamps and obstructions.</summary>
+/// <remarks>
+/// All positions are in the site frame (x east, y north, z up, metres, origin chosen by the user at ground level).
+/// A site is immutable; build a changed copy with <c>with</c>.
+/// </remarks>
+/// <param name="Id">Short identifier, unique among the user's sites.</param>
+/// <param name="Name">Display name.</param>
+/// <param name="Location">Latitude, longitude and elevation.</param>
+/// <param name="Zone">The site's IANA time zone; photoperiods and working hours are local to it.</param>
+/// <param name="Structure">The glasshouse range or indoor room.</param>
+/// <param name="Benches">Growing surfaces with their sample grids.</param>
+/// <param name="Lamps">Fixtures, overhead and side.</param>
+/// <param name="Obstructions">Opaque boxes that cast shade.</param>
+/// <param name="Weather">Where outside light comes from.</param>
+public sealed record Site(
+    string Id,
+    string Name,
+    GeoLocation Location,
+    DateTimeZone Zone,
+    Structure Structure,
+    ImmutableArray<Bench> Benches,
+    ImmutableArray<Lamp> Lamps,
+    ImmutableArray<Obstruction> Obstructions,
+    WeatherSettings Weather);
