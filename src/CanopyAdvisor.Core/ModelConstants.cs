@@ -30,4 +30,13 @@ public static class ModelConstants
 
     /// <summary>G-function of a spherical leaf-angle distribution, 0.5 (Ross 1981; Monsi &amp; Saeki 1953 extinction).</summary>
     public const double SphericalLeafProjection = 0.5;
+
+    /// <summary>
+    /// Fraction of the axial intensity that defines a beam's edge, 0.5: the beam angle is the full angle between the
+    /// two directions where intensity falls to 50 % of the maximum (IES definition, common practice for lamp data sheets).
+    /// </summary>
+    public const double BeamAngleIntensityFraction = 0.5;
+
+    /// <summary>Metres per international foot, 0.3048 exactly (international yard and pound agreement, 1959).</summary>
+    public const double MetresPerFoot = 0.3048;
 }
