@@ -15,4 +15,10 @@ public sealed record SunTimesInput(LocalDate Date, DateTimeZone Zone, GeoLocatio
 
     /// <summary>Atmospheric refraction at sunrise and sunset; h0′ = −(sun radius 0.26667° + this) = −0.8333° by default.</summary>
     public Angle AtmosphericRefractionAtSunrise { get; init; } = Angle.FromDegrees(ModelConstants.RefractionAtSunriseDegrees);
+
+    /// <summary>
+    /// The method: the events of the local date, iterated (default), or the report's appendix A.2 exactly (which
+    /// reproduces its worked example); see <see cref="SunTimesMethod"/>.
+    /// </summary>
+    public SunTimesMethod Method { get; init; } = SunTimesMethod.LocalDayIterated;
 }

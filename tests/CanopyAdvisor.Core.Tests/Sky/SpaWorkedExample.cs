@@ -37,5 +37,6 @@ internal static class SpaWorkedExample
     {
         DeltaTSeconds = 67.0,
         AtmosphericRefractionAtSunrise = Angle.FromDegrees(0.5667),
+        Method = SunTimesMethod.ReportAppendixA2,
     };
 }
