@@ -1,4 +1,4 @@
-using System.Collections.Immutable;
+using System.Globalization;
 using System.Text.Json;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
@@ -124,6 +124,8 @@ public sealed class SiteFileReader
                 throw new InvalidInputException(errors);
             }
 
+            // An editor hint ("$schema": "site.schema.json"); it does not change the site.
+            root.Text("$schema", required: false);
             int? version = root.Integer("formatVersion");
             if (version is int v && v != FormatVersion)
             {
@@ -182,7 +184,7 @@ public sealed class SiteFileReader
             }
 
             List<ValidationError> all = [.. errors, .. found.Where(f => !errors.Any(e => Overlaps(e.Path, f.Path)))];
-            all = all.Distinct().ToList();
+            all = ShortenRows(all.Distinct().ToList());
             if (all.Count > 0)
             {
                 throw new InvalidInputException(all);
@@ -190,6 +192,31 @@ public sealed class SiteFileReader
 
             return draft;
         }
+
+        /// <summary>Keeps the first few placement errors of each lamp row and counts the rest, so one wrong row is not 100 lines.</summary>
+        private static List<ValidationError> ShortenRows(List<ValidationError> all)
+        {
+            const int Shown = 3;
+            var result = new List<ValidationError>();
+            // Placement errors of a row share the row's path; every other error keeps a group of its own.
+            IEnumerable<IGrouping<string, ValidationError>> groups = all
+                .Select((e, i) => (Error: e, Key: IsRowPlacement(e.Path) ? e.Path : string.Create(CultureInfo.InvariantCulture, $"#{i}")))
+                .GroupBy(t => t.Key, t => t.Error);
+            foreach (IGrouping<string, ValidationError> group in groups)
+            {
+                result.AddRange(group.Take(Shown));
+                int more = group.Count() - Shown;
+                if (more > 0)
+                {
+                    result.Add(new ValidationError(group.Key, $"… and {more} more problems with lamps of this row"));
+                }
+            }
+
+            return result;
+        }
+
+        private static bool IsRowPlacement(string path) =>
+            path.StartsWith("lampRows[", StringComparison.Ordinal) && path.EndsWith(']') && path.IndexOf('.', StringComparison.Ordinal) < 0;
 
         private static bool Overlaps(string a, string b) => a == b || IsInside(a, b) || IsInside(b, a);
 
