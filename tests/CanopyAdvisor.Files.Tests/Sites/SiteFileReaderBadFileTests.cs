@@ -1,0 +1,125 @@
+using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Sites;
+
+namespace CanopyAdvisor.Files.Tests.Sites;
+
+/// <summary>
+/// One bad file per rule of the site file reference (src/CanopyAdvisor.Files/Sites/README.md, "Rules"), each asserting the
+/// exact path the error names. The label of each case says where the rule comes from.
+/// </summary>
+public class SiteFileReaderBadFileTests
+{
+    private const string G = "glasshouse";
+    private const string R = "room";
+
+    /// <summary>label, base file, path to change, new value (JSON), expected error path, expected message fragment.</summary>
+    public static TheoryData<string, string, string, string, string, string> Cases => new()
+    {
+        // Geographic ranges: the definition of latitude and longitude (ISO 6709).
+        { "latitude above 90° (ISO 6709)", G, "location.latitudeDeg", "91", "location.latitudeDeg", "must be within [-90, 90], got 91" },
+        { "longitude below −180° (ISO 6709)", G, "location.longitudeDeg", "-181", "location.longitudeDeg", "must be within [-180, 180]" },
+        { "elevation far below the lowest land (README rule)", G, "location.elevationM", "-1000", "location.elevationM", "must be within [-500, 9000]" },
+        { "unknown IANA zone (IANA tz database has no Europe/Atlantis)", G, "timeZone", "\"Europe/Atlantis\"", "timeZone", "unknown IANA time zone 'Europe/Atlantis'" },
+
+        // Sizes must be positive (README rule: negative or zero sizes).
+        { "bench width 0 (README: sizes > 0)", G, "benches[0].footprint.widthM", "0", "benches[0].footprint.widthM", "must be > 0, got 0" },
+        { "bench length negative (README: sizes > 0)", G, "benches[0].footprint.lengthM", "-2", "benches[0].footprint.lengthM", "must be > 0, got -2" },
+        { "structure length 0 (README: sizes > 0)", G, "structure.footprint.lengthM", "0", "structure.footprint.lengthM", "must be > 0" },
+        { "gutter height 0 (README: sizes > 0)", G, "structure.gutterHeightM", "0", "structure.gutterHeightM", "must be > 0" },
+        { "room height negative (README: sizes > 0)", R, "structure.heightM", "-3", "structure.heightM", "must be > 0" },
+        { "canopy height 0 (README: sizes > 0)", G, "benches[0].canopy.heightM", "0", "benches[0].canopy.heightM", "must be > 0" },
+        { "bench surface below ground (README: heights ≥ 0)", G, "benches[0].surfaceHeightM", "-0.1", "benches[0].surfaceHeightM", "must be ≥ 0" },
+        { "leaf area density negative (README: LAD ≥ 0)", G, "benches[0].canopy.leafAreaDensityM2PerM3", "-1", "benches[0].canopy.leafAreaDensityM2PerM3", "must be ≥ 0" },
+
+        // Glasshouse geometry (MODEL.md §2: gutter-connected bays fill the range; README: ±0.01 m).
+        { "bays 2 × 7.9 m ≠ 16 m (MODEL.md §2)", G, "structure.bayWidthM", "7.9", "structure.bayWidthM", "bayCount × bayWidthM = 15.8 m must equal footprint.widthM = 16 m" },
+        { "bay count 0 (README: ≥ 1)", G, "structure.bayCount", "0", "structure.bayCount", "must be ≥ 1, got 0" },
+        { "roof slope 90° (README: [0, 90))", G, "structure.roofSlopeDeg", "90", "structure.roofSlopeDeg", "must be within [0, 90)" },
+        { "structural shading 1 (MODEL.md §2: a fraction below 1)", G, "structure.structuralShading", "1", "structure.structuralShading", "must be within [0, 1), got 1" },
+        { "structural shading negative (MODEL.md §2)", G, "structure.structuralShading", "-0.1", "structure.structuralShading", "must be within [0, 1)" },
+
+        // Covers (Duffie & Beckman ch. 5: real glazings have n ≥ 1, K ≥ 0, at least one layer).
+        { "refractive index 0.9 (physics: n ≥ 1)", G, "coverTypes.glass.refractiveIndex", "0.9", "coverTypes.glass.refractiveIndex", "must be ≥ 1, got 0.9" },
+        { "extinction negative (Duffie & Beckman K ≥ 0)", G, "coverTypes.glass.extinctionPerM", "-4", "coverTypes.glass.extinctionPerM", "must be ≥ 0" },
+        { "0 layers on a glazing (README: ≥ 1 unless opaque)", G, "coverTypes.glass.layers", "0", "coverTypes.glass.layers", "must be ≥ 1 for a cover that is not opaque" },
+        { "glazing without thickness (README: required unless opaque)", G, "coverTypes.glass.thicknessM", SiteJson.Remove, "coverTypes.glass.thicknessM", "is required" },
+        { "unknown cover type (README: covers name a coverTypes entry)", G, "structure.covers.roof", "\"acrylic\"", "structure.covers.roof", "unknown cover type 'acrylic'" },
+
+        // Benches against the structure (README rules).
+        { "bench reaches past the east wall (README: benches inside)", G, "benches[0].footprint.cornerXM", "15", "benches[0].footprint", "reaches outside the structure's footprint" },
+        { "canopy top above the gutter (README)", G, "benches[0].canopy.heightM", "4.5", "benches[0].canopy.heightM", "bench top + canopy = 5.25 m is above structure.gutterHeightM = 5 m" },
+        { "tier canopy above the ceiling (README)", R, "benches[0].canopy.heightM", "1.2", "benches[0].canopy.heightM", "is above structure.heightM = 3 m" },
+        { "sensing depth below the canopy (README: ≤ canopy height)", G, "benches[0].canopy.sensingDepthM", "0.4", "benches[0].canopy.sensingDepthM", "must be ≤ canopy.heightM = 0.3 m, got 0.4 m" },
+        { "0 samples along (README: 1–400)", G, "benches[0].samplesAlongLength", "0", "benches[0].samplesAlongLength", "must be within [1, 400], got 0" },
+        { "401 samples across (README: 1–400)", G, "benches[0].samplesAcrossWidth", "401", "benches[0].samplesAcrossWidth", "must be within [1, 400], got 401" },
+        { "empty bench id (README: ids non-empty)", G, "benches[0].id", "\"\"", "benches[0].id", "must not be empty" },
+        { "no benches (README: at least one)", G, "benches", "[]", "benches", "must list at least one bench" },
+        {
+            "duplicate bench id (README: unique ids)", G, "benches[1]",
+            """{ "id": "b1", "footprint": { "cornerXM": 6, "cornerYM": 2, "axisAzimuthDeg": 0, "lengthM": 10, "widthM": 1.8 }, "surfaceHeightM": 0.75, "canopy": { "heightM": 0.3, "sensingDepthM": 0.05, "leafAreaDensityM2PerM3": 6 }, "samplesAlongLength": 5, "samplesAcrossWidth": 2 }""",
+            "benches[1].id", "duplicate bench id 'b1' (first used at benches[0])"
+        },
+
+        // Lamps (README rules; lamps hang inside the structure).
+        { "lamp inside a bench's canopy (README)", G, "lamps[0]", """{ "id": "low", "type": "side", "xM": 3, "yM": 5, "zM": 0.9, "schedule": { "on": "00:00", "off": "00:00" } }""", "lamps[0]", "lamp 'low' at (3, 5, 0.9) m is inside the canopy of bench 'b1'" },
+        { "lamp west of the west wall (README: lamps inside)", G, "lamps[0].xM", "-3", "lamps[0]", "is outside the structure's footprint" },
+        { "lamp above the roof (README: lamps inside)", G, "lamps[0].zM", "9", "lamps[0]", "is not between the floor and the roof" },
+        { "lamp above the ceiling (README: lamps inside)", R, "lampRows[0].start.zM", "3.5", "lampRows[0]", "is not between the floor and the ceiling (3 m there)" },
+        { "dimming 1.5 (README: [0, 1])", G, "lamps[0].dimming", "1.5", "lamps[0].dimming", "must be within [0, 1], got 1.5" },
+        { "row dimming negative (README: [0, 1])", G, "lampRows[0].dimming", "-0.1", "lampRows[0].dimming", "must be within [0, 1]" },
+        { "tilt 190° (README: [0, 180])", G, "lamps[0].aim.tiltDeg", "190", "lamps[0].aim.tiltDeg", "must be within [0, 180]" },
+        { "daylight threshold negative (README: ≥ 0)", G, "lamps[0].schedule.offAboveOutsidePpfd", "-1", "lamps[0].schedule.offAboveOutsidePpfd", "must be ≥ 0" },
+        { "time 25:00 (ISO 8601 24 h clock)", G, "lamps[0].schedule.on", "\"25:00\"", "lamps[0].schedule.on", "must be a local time \"HH:mm\"" },
+        { "unknown lamp type (README: type names a lampTypes entry)", G, "lamps[0].type", "\"x\"", "lamps[0].type", "unknown lamp type 'x' (defined: top, side)" },
+        { "lamp id repeats a row lamp's id (README: unique ids)", G, "lamps[0].id", "\"row-2\"", "lampRows[0].id", "duplicate lamp id 'row-2' (first used at lamps[0])" },
+        { "row of 0 lamps (README: 1–1000)", G, "lampRows[0].count", "0", "lampRows[0].count", "must be within [1, 1000], got 0" },
+
+        // Lamp types (MODEL.md §0 bands: blue, green and red split PAR, so they add up to 1).
+        { "bands add up to 0.66 (MODEL.md §0)", G, "lampTypes.top.bands.red", "0.5", "lampTypes.top.bands", "blue + green + red must be 1 (±0.01), got 0.66" },
+        { "negative far-red (MODEL.md §0)", G, "lampTypes.top.bands.farRed", "-0.1", "lampTypes.top.bands.farRed", "must be ≥ 0" },
+        { "PPF 0 (README: > 0)", G, "lampTypes.top.ppfUmolPerS", "0", "lampTypes.top.ppfUmolPerS", "must be > 0" },
+        { "negative watts (README: ≥ 0)", G, "lampTypes.side.watts", "-5", "lampTypes.side.watts", "must be ≥ 0" },
+        { "beam angle 180° (cosⁿ needs a beam angle below 180°)", G, "lampTypes.top.beam.beamAngleDeg", "180", "lampTypes.top.beam.beamAngleDeg", "must be within (0, 180)" },
+        { "unknown beam kind (README: four kinds)", G, "lampTypes.top.beam.kind", "\"spot\"", "lampTypes.top.beam.kind", "unknown beam kind 'spot'" },
+
+        // Obstructions and weather (README rules).
+        { "obstruction top at its base (README: top > base)", G, "obstructions[0].topHeightM", "0", "obstructions[0].topHeightM", "must be above baseHeightM = 0 m, got 0 m" },
+        { "daily clearness 0 (README: (0, 1])", G, "weather.dailyClearness", "0", "weather.dailyClearness", "must be within (0, 1], got 0" },
+        { "Linke turbidity below 1 (Ineichen & Perez 2002: 1 = clean dry air)", G, "weather.linkeTurbidity", "0.5", "weather.linkeTurbidity", "must be within [1, 10]" },
+        { "glasshouse without weather (README: required for a glasshouse)", G, "weather", SiteJson.Remove, "weather", "is required" },
+
+        // The shape of the file (README: format).
+        { "unknown property (README: no unknown names)", G, "benches[0].widht", "2", "benches[0].widht", "unknown property (expected one of:" },
+        { "integer given as text (README: bayCount is an integer)", G, "structure.bayCount", "\"six\"", "structure.bayCount", "must be an integer, got the string \"six\"" },
+        { "integer given as a fraction (README: bayCount is an integer)", G, "structure.bayCount", "2.5", "structure.bayCount", "must be an integer, got 2.5" },
+        { "number given as text (README: numbers)", G, "location.elevationM", "\"low\"", "location.elevationM", "must be a number, got the string \"low\"" },
+        { "missing required field (README)", G, "benches[0].surfaceHeightM", SiteJson.Remove, "benches[0].surfaceHeightM", "is required" },
+        { "array expected (README)", G, "obstructions", "{}", "obstructions", "must be an array, got an object" },
+        { "object expected (README)", G, "location", "52", "location", "must be an object, got the number 52" },
+        { "unknown structure kind (README: glasshouse or indoorRoom)", G, "structure.kind", "\"tunnel\"", "structure.kind", "unknown structure kind 'tunnel'" },
+        { "future format version (README: version 1)", G, "formatVersion", "2", "formatVersion", "unsupported format version 2" },
+    };
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void Bad_file_is_rejected_with_the_exact_path(string label, string baseFile, string path, string valueJson, string expectedPath, string expectedMessage)
+    {
+        string json = SiteJson.With(baseFile == G ? SiteJson.Glasshouse : SiteJson.IndoorRoom, (path, valueJson));
+
+        var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "test.json", null));
+
+        Assert.True(
+            e.Errors.Any(x => x.Path == expectedPath && x.Message.Contains(expectedMessage, StringComparison.Ordinal)),
+            $"{label}: expected '{expectedPath}: …{expectedMessage}…' among:\n{string.Join('\n', e.Errors)}");
+    }
+
+    [Theory]
+    [InlineData("glasshouse")]
+    [InlineData("room")]
+    public void Base_files_of_the_table_are_valid(string baseFile)
+    {
+        // Guards the table: each case changes one thing in a file that is otherwise accepted.
+        var site = new SiteFileReader(new TestBeams()).Parse(baseFile == G ? SiteJson.Glasshouse : SiteJson.IndoorRoom, "test.json", null);
+        Assert.NotEmpty(site.Benches);
+    }
+}
