@@ -186,9 +186,9 @@ public static class LightFieldCompiler
     private static void Validate(Site site, LightFieldOptions options)
     {
         var errors = new List<ValidationError>();
-        if (options.SkyZenithRings is < 1 or > 90)
+        if (options.SkyZenithRings is < 1 or > 360)
         {
-            errors.Add(new ValidationError("options.skyZenithRings", "must be between 1 and 90"));
+            errors.Add(new ValidationError("options.skyZenithRings", "must be between 1 and 360"));
         }
 
         if (site.Zone is null)
