@@ -75,4 +75,25 @@ public static class ModelConstants
 
     /// <summary>Standard sea-level pressure, 101 325 Pa (ISO 2533 standard atmosphere); scales air mass with site pressure.</summary>
     public const double StandardPressurePascals = 101325.0;
+
+    /// <summary>
+    /// Blue (400–500 nm) share of daylight PAR photons, 0.29 (from memory: typical clear-day daylight spectra;
+    /// not verified). With <see cref="DaylightGreenFraction"/> and <see cref="DaylightRedFraction"/> it sums to 1.
+    /// </summary>
+    public const double DaylightBlueFraction = 0.29;
+
+    /// <summary>Green (500–600 nm) share of daylight PAR photons, 0.36 (from memory; not verified).</summary>
+    public const double DaylightGreenFraction = 0.36;
+
+    /// <summary>Red (600–700 nm) share of daylight PAR photons, 0.35 (from memory; not verified).</summary>
+    public const double DaylightRedFraction = 0.35;
+
+    /// <summary>Width of the red band, 100 nm (600–700 nm, MODEL.md §0 band definition).</summary>
+    public const double RedBandWidthNm = 100.0;
+
+    /// <summary>Width of the far-red band, 50 nm (700–750 nm, MODEL.md §0 band definition).</summary>
+    public const double FarRedBandWidthNm = 50.0;
+
+    /// <summary>Width of each R:FR window, 10 nm (655–665 nm and 725–735 nm; Smith 1982 definition of R:FR).</summary>
+    public const double RedToFarRedWindowNm = 10.0;
 }

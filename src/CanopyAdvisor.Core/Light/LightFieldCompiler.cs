@@ -1,0 +1,443 @@
+using System.Collections.Immutable;
+using CanopyAdvisor.Core.Geometry;
+using CanopyAdvisor.Core.Lamps;
+using CanopyAdvisor.Core.Sites;
+using CanopyAdvisor.Core.Structures;
+using CanopyAdvisor.Core.Validation;
+
+namespace CanopyAdvisor.Core.Light;
+
+/// <summary>Precomputes the time-invariant light at every sample point of a site (done once per site and lamp state).</summary>
+/// <remarks>
+/// <para>
+/// Lamps: a lamp of photon flux Φ (PPF × dimming) and intensity distribution I(θ, φ) per unit flux gives at a point at
+/// distance d the normal irradiance E = Φ·I/d² (inverse-square law; MODEL.md §3 with E = I cos(incidence)/d² on a
+/// surface facing the lamp), attenuated by the canopy (<see cref="CanopyAttenuation"/>) and zero when the enclosure
+/// has an opaque surface on the segment. It is stored as the vector E·û toward the lamp, the horizontal part
+/// E·max(0, û·ẑ) and the scalar E, summed over the lamps of each <see cref="LampGroup"/>.
+/// </para>
+/// <para>
+/// Sky: per point, the view factor f, sky vector v and scalar factor s of the sky seen through the enclosure and the
+/// canopy, with weight w(ω) = enclosure.SkyTransmittance(point, ω) × canopy transmission(ω). Indoor rooms have no sky.
+/// </para>
+/// <para>Points are computed in parallel; the inner loop over lamps allocates nothing.</para>
+/// </remarks>
+public static class LightFieldCompiler
+{
+    /// <summary>Compiles the light field of a site.</summary>
+    /// <param name="site">The site: benches (sample grids, canopies) and lamps.</param>
+    /// <param name="enclosure">The site's enclosure (covers, walls, obstructions), built for the same site.</param>
+    /// <param name="options">Compile settings; <see cref="LightFieldOptions.Default"/> when null.</param>
+    /// <exception cref="InvalidInputException">The site has bad benches or lamps; every problem is listed.</exception>
+    public static CompiledLightField Compile(Site site, IEnclosure enclosure, LightFieldOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(site);
+        ArgumentNullException.ThrowIfNull(enclosure);
+        options ??= LightFieldOptions.Default;
+        Validate(site, options);
+
+        ImmutableArray<Bench> benches = site.Benches.IsDefault ? [] : site.Benches;
+        ImmutableArray<Lamp> lamps = site.Lamps.IsDefault ? [] : site.Lamps;
+
+        // Sample points, bench by bench.
+        int[] benchStart = new int[benches.Length + 1];
+        var pointsBuilder = ImmutableArray.CreateBuilder<SamplePoint>();
+        for (int b = 0; b < benches.Length; b++)
+        {
+            benchStart[b] = pointsBuilder.Count;
+            pointsBuilder.AddRange(SampleGrid.ForBench(benches[b], b));
+        }
+
+        benchStart[benches.Length] = pointsBuilder.Count;
+        ImmutableArray<SamplePoint> points = pointsBuilder.ToImmutable();
+
+        // Lamp groups: equal schedule, dimming and bands.
+        var groupIndex = new Dictionary<(LampSchedule, double, BandFractions), int>();
+        var groupMembers = new List<List<string>>();
+        var groupKeys = new List<(LampSchedule Schedule, double Dimming, BandFractions Bands)>();
+        var lampData = new LampData[lamps.Length];
+        for (int l = 0; l < lamps.Length; l++)
+        {
+            Lamp lamp = lamps[l];
+            var key = (lamp.Schedule, lamp.Dimming, lamp.Bands);
+            if (!groupIndex.TryGetValue(key, out int g))
+            {
+                g = groupKeys.Count;
+                groupIndex.Add(key, g);
+                groupKeys.Add(key);
+                groupMembers.Add([]);
+            }
+
+            groupMembers[g].Add(lamp.Id);
+            lampData[l] = new LampData(lamp, g);
+        }
+
+        var groups = ImmutableArray.CreateBuilder<LampGroup>(groupKeys.Count);
+        for (int g = 0; g < groupKeys.Count; g++)
+        {
+            groups.Add(new LampGroup(groupKeys[g].Schedule, groupKeys[g].Dimming, groupKeys[g].Bands, [.. groupMembers[g]]));
+        }
+
+        int n = points.Length;
+        int groupCount = groupKeys.Count;
+        double[] contributions = new double[n * groupCount * CompiledLightField.Stride];
+        double[] skyF = new double[n], skyX = new double[n], skyY = new double[n], skyZ = new double[n], skyS = new double[n];
+        bool hasSky = site.Structure is not IndoorRoom;
+        InterimSkyGrid? skyGrid = hasSky ? new InterimSkyGrid(options.SkyZenithRings) : null;
+
+        Parallel.For(0, n, p =>
+        {
+            SamplePoint point = points[p];
+            Bench bench = benches[point.BenchIndex];
+            var canopy = new PointCanopy(bench, point);
+            AccumulateLamps(point.Position, canopy, lampData, enclosure, contributions.AsSpan(p * groupCount * CompiledLightField.Stride, groupCount * CompiledLightField.Stride));
+            if (skyGrid is not null)
+            {
+                Vector3 position = point.Position;
+                var (f, v, s) = ComputeSkyView(
+                    skyGrid, position, omega => enclosure.SkyTransmittance(position, omega) * canopy.Transmission(omega, double.PositiveInfinity));
+                skyF[p] = f;
+                skyX[p] = v.X;
+                skyY[p] = v.Y;
+                skyZ[p] = v.Z;
+                skyS[p] = s;
+            }
+        });
+
+        return new CompiledLightField(
+            site.Zone, benches, points, benchStart, groups.MoveToImmutable(), enclosure, hasSky,
+            skyF, skyX, skyY, skyZ, skyS, contributions);
+    }
+
+    /// <summary>
+    /// The sky view of a point for a direction weight: f = (1/π)∫w cos θ dω, v = (1/π)∫w ω̂ dω, s = (1/π)∫w dω over
+    /// the upper hemisphere. Interim: replace the body with the shared <c>SkyViewIntegrator.Integrate</c> once merged.
+    /// </summary>
+    internal static (double ViewFactor, Vector3 SkyVector, double ScalarFactor) ComputeSkyView(
+        InterimSkyGrid grid, Vector3 point, Func<Vector3, double> weight)
+    {
+        _ = point;
+        return grid.Integrate(weight);
+    }
+
+    /// <summary>Adds every lamp's contribution at one point into that point's group accumulators.</summary>
+    private static void AccumulateLamps(Vector3 point, PointCanopy canopy, LampData[] lamps, IEnclosure enclosure, Span<double> into)
+    {
+        for (int l = 0; l < lamps.Length; l++)
+        {
+            ref readonly LampData lamp = ref lamps[l];
+            if (lamp.Flux <= 0)
+            {
+                continue;
+            }
+
+            // û: unit vector from the point toward the lamp.
+            double dx = lamp.X - point.X, dy = lamp.Y - point.Y, dz = lamp.Z - point.Z;
+            double d2 = (dx * dx) + (dy * dy) + (dz * dz);
+            if (d2 < 1e-12)
+            {
+                continue;
+            }
+
+            double d = Math.Sqrt(d2);
+            double ux = dx / d, uy = dy / d, uz = dz / d;
+
+            // Direction leaving the lamp toward the point is −û; in the lamp frame: polar from the axis, around from C = 0°.
+            double cosPolar = -((ux * lamp.AxisX) + (uy * lamp.AxisY) + (uz * lamp.AxisZ));
+            cosPolar = Math.Clamp(cosPolar, -1.0, 1.0);
+            double around = 0;
+            if (!lamp.Symmetric)
+            {
+                around = Math.Atan2(
+                    -((ux * lamp.ThirdX) + (uy * lamp.ThirdY) + (uz * lamp.ThirdZ)),
+                    -((ux * lamp.RefX) + (uy * lamp.RefY) + (uz * lamp.RefZ)));
+                if (around < 0)
+                {
+                    around += 2 * Math.PI;
+                }
+            }
+
+            double intensity = lamp.Distribution.IntensityPerUnitFlux(Math.Acos(cosPolar), around);
+            if (!(intensity > 0))
+            {
+                continue;
+            }
+
+            double e = lamp.Flux * intensity / d2;
+            e *= canopy.Transmission(ux, uy, uz, d);
+            if (!(e > 0) || enclosure.IsBlocked(point, lamp.Position))
+            {
+                continue;
+            }
+
+            int k = lamp.Group * CompiledLightField.Stride;
+            into[k] += e * ux;
+            into[k + 1] += e * uy;
+            into[k + 2] += e * uz;
+            if (uz > 0)
+            {
+                into[k + 3] += e * uz;
+            }
+
+            into[k + 4] += e;
+        }
+    }
+
+    private static void Validate(Site site, LightFieldOptions options)
+    {
+        var errors = new List<ValidationError>();
+        if (options.SkyZenithRings is < 1 or > 360)
+        {
+            errors.Add(new ValidationError("options.skyZenithRings", "must be between 1 and 360"));
+        }
+
+        if (site.Zone is null)
+        {
+            errors.Add(new ValidationError("zone", "is required"));
+        }
+
+        if (site.Structure is null)
+        {
+            errors.Add(new ValidationError("structure", "is required"));
+        }
+
+        ImmutableArray<Bench> benches = site.Benches.IsDefault ? [] : site.Benches;
+        for (int b = 0; b < benches.Length; b++)
+        {
+            ValidateBench(benches[b], $"benches[{b}]", errors);
+        }
+
+        ImmutableArray<Lamp> lamps = site.Lamps.IsDefault ? [] : site.Lamps;
+        for (int l = 0; l < lamps.Length; l++)
+        {
+            ValidateLamp(lamps[l], $"lamps[{l}]", errors);
+        }
+
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+    }
+
+    private static void ValidateBench(Bench? bench, string path, List<ValidationError> errors)
+    {
+        if (bench is null)
+        {
+            errors.Add(new ValidationError(path, "is required"));
+            return;
+        }
+
+        if (bench.SamplesAlongLength < 1)
+        {
+            errors.Add(new ValidationError($"{path}.samplesAlongLength", "must be ≥ 1"));
+        }
+
+        if (bench.SamplesAcrossWidth < 1)
+        {
+            errors.Add(new ValidationError($"{path}.samplesAcrossWidth", "must be ≥ 1"));
+        }
+
+        if ((long)bench.SamplesAlongLength * bench.SamplesAcrossWidth > 1_000_000)
+        {
+            errors.Add(new ValidationError(path, "must have at most 1,000,000 sample points"));
+        }
+
+        if (!double.IsFinite(bench.SurfaceHeightM))
+        {
+            errors.Add(new ValidationError($"{path}.surfaceHeightM", "must be a finite number"));
+        }
+
+        Footprint? footprint = bench.Footprint;
+        if (footprint is null)
+        {
+            errors.Add(new ValidationError($"{path}.footprint", "is required"));
+        }
+        else
+        {
+            if (!(footprint.LengthM > 0) || !double.IsFinite(footprint.LengthM))
+            {
+                errors.Add(new ValidationError($"{path}.footprint.lengthM", "must be > 0"));
+            }
+
+            if (!(footprint.WidthM > 0) || !double.IsFinite(footprint.WidthM))
+            {
+                errors.Add(new ValidationError($"{path}.footprint.widthM", "must be > 0"));
+            }
+
+            if (!double.IsFinite(footprint.CornerXM) || !double.IsFinite(footprint.CornerYM) || !double.IsFinite(footprint.AxisAzimuth.Radians))
+            {
+                errors.Add(new ValidationError($"{path}.footprint", "corner and axis azimuth must be finite"));
+            }
+        }
+
+        Canopy? canopy = bench.Canopy;
+        if (canopy is null)
+        {
+            errors.Add(new ValidationError($"{path}.canopy", "is required"));
+            return;
+        }
+
+        if (!(canopy.HeightM >= 0) || !double.IsFinite(canopy.HeightM))
+        {
+            errors.Add(new ValidationError($"{path}.canopy.heightM", "must be ≥ 0"));
+        }
+
+        if (!(canopy.SensingDepthM >= 0) || !(canopy.SensingDepthM <= canopy.HeightM))
+        {
+            errors.Add(new ValidationError($"{path}.canopy.sensingDepthM", "must be between 0 and the canopy height"));
+        }
+
+        if (!(canopy.LeafAreaDensityM2PerM3 >= 0) || !double.IsFinite(canopy.LeafAreaDensityM2PerM3))
+        {
+            errors.Add(new ValidationError($"{path}.canopy.leafAreaDensityM2PerM3", "must be ≥ 0"));
+        }
+    }
+
+    private static void ValidateLamp(Lamp? lamp, string path, List<ValidationError> errors)
+    {
+        if (lamp is null)
+        {
+            errors.Add(new ValidationError(path, "is required"));
+            return;
+        }
+
+        if (!double.IsFinite(lamp.Position.X) || !double.IsFinite(lamp.Position.Y) || !double.IsFinite(lamp.Position.Z))
+        {
+            errors.Add(new ValidationError($"{path}.position", "must be finite"));
+        }
+
+        if (lamp.Aim is null)
+        {
+            errors.Add(new ValidationError($"{path}.aim", "is required"));
+        }
+        else if (!double.IsFinite(lamp.Aim.Yaw.Radians) || !double.IsFinite(lamp.Aim.Tilt.Radians) || !double.IsFinite(lamp.Aim.Spin.Radians))
+        {
+            errors.Add(new ValidationError($"{path}.aim", "angles must be finite"));
+        }
+
+        if (lamp.Distribution is null)
+        {
+            errors.Add(new ValidationError($"{path}.distribution", "is required"));
+        }
+
+        if (!(lamp.PpfMicromolesPerSecond >= 0) || !double.IsFinite(lamp.PpfMicromolesPerSecond))
+        {
+            errors.Add(new ValidationError($"{path}.ppfMicromolesPerSecond", "must be ≥ 0"));
+        }
+
+        if (!(lamp.Dimming >= 0) || !(lamp.Dimming <= 1))
+        {
+            errors.Add(new ValidationError($"{path}.dimming", "must be between 0 and 1"));
+        }
+
+        if (lamp.Schedule is null)
+        {
+            errors.Add(new ValidationError($"{path}.schedule", "is required"));
+        }
+
+        BandFractions? bands = lamp.Bands;
+        if (bands is null)
+        {
+            errors.Add(new ValidationError($"{path}.bands", "is required"));
+        }
+        else if (!(bands.Blue >= 0) || !(bands.Green >= 0) || !(bands.Red >= 0) || !(bands.FarRed >= 0) ||
+                 !double.IsFinite(bands.FarRed) || Math.Abs(bands.Blue + bands.Green + bands.Red - 1) > 1e-3)
+        {
+            errors.Add(new ValidationError($"{path}.bands", "blue, green and red must be ≥ 0 and add up to 1; far-red ≥ 0"));
+        }
+    }
+
+    /// <summary>A lamp flattened for the inner loop: position, frame, flux and group.</summary>
+    private readonly struct LampData
+    {
+        public LampData(Lamp lamp, int group)
+        {
+            var frame = new LampOrientation(lamp.Aim);
+            Position = lamp.Position;
+            X = lamp.Position.X;
+            Y = lamp.Position.Y;
+            Z = lamp.Position.Z;
+            AxisX = frame.Axis.X;
+            AxisY = frame.Axis.Y;
+            AxisZ = frame.Axis.Z;
+            RefX = frame.Reference.X;
+            RefY = frame.Reference.Y;
+            RefZ = frame.Reference.Z;
+            ThirdX = frame.Third.X;
+            ThirdY = frame.Third.Y;
+            ThirdZ = frame.Third.Z;
+            Flux = lamp.PpfMicromolesPerSecond * lamp.Dimming;
+            Distribution = lamp.Distribution;
+            Symmetric = lamp.Distribution.IsAxiallySymmetric;
+            Group = group;
+        }
+
+        public Vector3 Position { get; }
+
+        public double X { get; }
+
+        public double Y { get; }
+
+        public double Z { get; }
+
+        public double AxisX { get; }
+
+        public double AxisY { get; }
+
+        public double AxisZ { get; }
+
+        public double RefX { get; }
+
+        public double RefY { get; }
+
+        public double RefZ { get; }
+
+        public double ThirdX { get; }
+
+        public double ThirdY { get; }
+
+        public double ThirdZ { get; }
+
+        public double Flux { get; }
+
+        public BeamDistribution Distribution { get; }
+
+        public bool Symmetric { get; }
+
+        public int Group { get; }
+    }
+
+    /// <summary>One point's canopy geometry, for the transmission of many directions.</summary>
+    private readonly struct PointCanopy
+    {
+        private readonly double _toFront, _toBack, _toLeft, _toRight, _axisX, _axisY, _acrossX, _acrossY, _depth, _extinction;
+
+        public PointCanopy(Bench bench, SamplePoint point)
+        {
+            _toFront = point.ToFrontEdgeM;
+            _toBack = point.ToBackEdgeM;
+            _toLeft = point.ToLeftEdgeM;
+            _toRight = point.ToRightEdgeM;
+            _axisX = bench.Footprint.AxisDirection.X;
+            _axisY = bench.Footprint.AxisDirection.Y;
+            _acrossX = bench.Footprint.WidthDirection.X;
+            _acrossY = bench.Footprint.WidthDirection.Y;
+            _depth = bench.Canopy.SensingDepthM;
+            _extinction = CanopyAttenuation.ExtinctionPerM(bench.Canopy);
+        }
+
+        public double Transmission(double ux, double uy, double uz, double maxPathM)
+        {
+            if (_extinction <= 0)
+            {
+                return 1.0;
+            }
+
+            double path = CanopyAttenuation.PathLengthM(
+                _toFront, _toBack, _toLeft, _toRight, _axisX, _axisY, _acrossX, _acrossY, _depth, ux, uy, uz, maxPathM);
+            return Math.Exp(-_extinction * path);
+        }
+
+        public double Transmission(Vector3 u, double maxPathM) => Transmission(u.X, u.Y, u.Z, maxPathM);
+    }
+}
