@@ -20,7 +20,17 @@ namespace CanopyAdvisor.Core.Light;
 /// Sky: per point, the view factor f, sky vector v and scalar factor s of the sky seen through the enclosure and the
 /// canopy, with weight w(ω) = enclosure.SkyTransmittance(point, ω) × canopy transmission(ω). Indoor rooms have no sky.
 /// </para>
-/// <para>Points are computed in parallel; the inner loop over lamps allocates nothing.</para>
+/// <para>
+/// Points are computed in parallel; the inner loop over lamps allocates nothing and makes two calls per point–lamp
+/// pair that cannot be hoisted: the distribution's intensity (virtual) and the enclosure's <c>IsBlocked</c> (interface,
+/// only when the lamp shines on the point). A lamp within 1 µm of a sample point is skipped there (the point-source
+/// law has no value at the source).
+/// </para>
+/// <para>
+/// Memory: per point and group five doubles (vector x, y, z, horizontal, scalar), contiguous per point so a time step
+/// reads each point's groups in one run; 6,400 points × 4 groups take 1 MB, but 6,400 points × 800 separately
+/// scheduled or dimmed lamps would take 205 MB, so give lamps that switch together the same schedule record.
+/// </para>
 /// </remarks>
 public static class LightFieldCompiler
 {
@@ -140,7 +150,8 @@ public static class LightFieldCompiler
             }
 
             double d = Math.Sqrt(d2);
-            double ux = dx / d, uy = dy / d, uz = dz / d;
+            double inverse = 1 / d;
+            double ux = dx * inverse, uy = dy * inverse, uz = dz * inverse;
 
             // Direction leaving the lamp toward the point is −û; in the lamp frame: polar from the axis, around from C = 0°.
             double cosPolar = -((ux * lamp.AxisX) + (uy * lamp.AxisY) + (uz * lamp.AxisZ));

@@ -84,6 +84,7 @@ public static class LightSimulation
         int chunkCount = n < ParallelThreshold ? 1 : Math.Max(1, Environment.ProcessorCount * 4);
         int chunkSize = (n + chunkCount - 1) / Math.Max(1, chunkCount);
 
+        int missingTotal = 0;
         LocalDate date = firstDay;
         for (int day = 0; day < dayCount; day++, date = date.PlusDays(1))
         {
@@ -126,6 +127,7 @@ public static class LightSimulation
                 }
             }
 
+            missingTotal += missing;
             for (int b = 0; b < field.Benches.Length; b++)
             {
                 days.Add(Summarise(field, b, date, end - start, steps, missing, usableSeconds, sums));
@@ -134,7 +136,7 @@ public static class LightSimulation
             progress?.Report((day + 1) / (double)dayCount);
         }
 
-        return new LightPeriodSummary(firstDay, lastDay, dt, days.MoveToImmutable());
+        return new LightPeriodSummary(firstDay, lastDay, dt, days.MoveToImmutable(), missingTotal);
     }
 
     private static void StepChunk(

@@ -197,6 +197,11 @@ internal sealed partial class IesParser
             peak = Math.Max(peak, data[k]);
         }
 
+        if (peak == 0)
+        {
+            throw Fail(tokens[valuesStart].Line, "every intensity is zero: the file describes no light");
+        }
+
         if (!double.IsFinite(peak * scale) || !(scale > 0))
         {
             throw Fail(countLine, "the intensities overflow once multiplied by the candela multiplier and ballast factor");

@@ -85,6 +85,37 @@ public class LightFieldCompilerTests
         Assert.Equal(1000 / Math.PI / (1.5 * 1.5), bare[2].LightVector.Length, 9);
     }
 
+    // A lamp inside the canopy layer (5 cm over the sensing point, under a 10 cm sensing depth): the light's path
+    // through the leaves ends at the lamp, 0.05 m, not at the canopy top: exp(−0.5·4·0.05) (Beer–Lambert, G = 0.5).
+    [Fact]
+    public void Lamp_inside_the_canopy_is_attenuated_only_up_to_the_lamp()
+    {
+        Bench Make(double lad) => TestSites.Bench("b", 0, 0, 1, 1, 1, 1, canopyM: 0.3, depthM: 0.1, lad: lad);
+        Lamp lamp = TestSites.Lamp("in", new Vector3(0.5, 0.5, 1.05), IsotropicTestDistribution.Instance, 100);
+        double leafy = Evaluate(LightFieldCompiler.Compile(TestSites.Make(TestSites.Room, [Make(4)], [lamp]), IndoorTestEnclosure.Instance), Night, LocalTime.Noon)[0].HorizontalPpfd;
+        double bare = Evaluate(LightFieldCompiler.Compile(TestSites.Make(TestSites.Room, [Make(0)], [lamp]), IndoorTestEnclosure.Instance), Night, LocalTime.Noon)[0].HorizontalPpfd;
+        Assert.Equal(Math.Exp(-0.5 * 4 * 0.05), leafy / bare, 9);
+    }
+
+    // Edge effect on the sky (MODEL.md §3): with leaves, low sky reaches the edge point through the short side path
+    // but the middle point only through the top, so the edge point sees more sky; without leaves both see all of it
+    // (f = 1 under an open sky, the definition of the view factor).
+    [Fact]
+    public void Edge_point_sees_more_sky_than_the_middle_point_only_with_leaves()
+    {
+        Bench Make(double lad) => TestSites.Bench("b", 0, 0, 1, 2, 1, 5, canopyM: 0.3, depthM: 0.1, lad: lad);
+        CompiledLightField leafy = LightFieldCompiler.Compile(TestSites.Make(TestSites.Glasshouse, [Make(4)], []), OpenSkyTestEnclosure.Instance);
+        CompiledLightField bare = LightFieldCompiler.Compile(TestSites.Make(TestSites.Glasshouse, [Make(0)], []), OpenSkyTestEnclosure.Instance);
+        Assert.True(leafy.SkyViewAt(0).ViewFactor > leafy.SkyViewAt(2).ViewFactor + 0.005); // 0.7143 vs 0.7059 on the default grid
+        Assert.True(leafy.SkyViewAt(2).ViewFactor < 1);
+        Assert.Equal(1, bare.SkyViewAt(0).ViewFactor, 12);
+        Assert.Equal(1, bare.SkyViewAt(2).ViewFactor, 12);
+
+        // The edge point's extra light comes from its side (west, the near edge): its sky vector leans west.
+        Assert.True(leafy.SkyViewAt(0).SkyVector.X < 0);
+        Assert.Equal(0, leafy.SkyViewAt(2).SkyVector.X, 9);
+    }
+
     // Grouping is bookkeeping only: lamps that switch together sum the same light whether stored per group or per
     // lamp. Schedules with On = Off are "always on" (LampSchedule doc) but are different records, so each of these
     // lamps gets its own group; the result must equal the grouped one (to rounding).

@@ -61,8 +61,11 @@ public class LightSimulationTests
     public void Gaps_in_outside_light_are_counted_and_not_filled()
     {
         var source = new GappyOutsideLight(Instant.FromUtc(2026, 1, 10, 10, 0), Instant.FromUtc(2026, 1, 10, 12, 0));
-        var day = LightSimulation.Run(LampField(200, LampSchedule.AlwaysOn), source, new LocalDate(2026, 1, 10), new LocalDate(2026, 1, 10)).Days.Single();
+        var summary = LightSimulation.Run(LampField(200, LampSchedule.AlwaysOn), source, new LocalDate(2026, 1, 10), new LocalDate(2026, 1, 11));
+        BenchDayLight day = summary.Days[0];
         Assert.Equal(8, day.MissingSteps);
+        Assert.Equal(0, summary.Days[1].MissingSteps);
+        Assert.Equal(8, summary.MissingSteps);
         Assert.Equal(15.84, day.Dli, 9);
         Assert.Equal(200, day.MeanHorizontalPpfd, 9);
     }
