@@ -30,13 +30,15 @@ public class SolarPositionPropertyTests
                 && Math.Abs(r.Zenith.Degrees + r.RefractionCorrection.Degrees - r.ZenithWithoutRefraction.Degrees) < 1e-9;
         });
 
-    // The sun's declination never exceeds the obliquity of the ecliptic (about 23.44°; geometry).
+    // The sun's declination never exceeds the obliquity of the ecliptic plus the sun's tiny ecliptic latitude
+    // (|δ| ≤ ε + |β|, spherical triangle inequality on report eq. 31; |β| < 0.0003°).
     [Fact]
     public void Declination_StaysWithinObliquity() =>
         Cases.Sample(c =>
         {
             var r = SolarPosition.Calculate(new SolarPositionInput(c.Time, c.Location));
-            return Math.Abs(r.GeocentricDeclination.Degrees) <= r.TrueObliquity.Degrees + 1e-6;
+            return Math.Abs(r.GeocentricDeclination.Degrees)
+                <= r.TrueObliquity.Degrees + Math.Abs(r.GeocentricLatitude.Degrees) + 1e-9;
         });
 
     // The light field calls SunDirection once per time step: it must not allocate (a design promise; counted, not timed).
