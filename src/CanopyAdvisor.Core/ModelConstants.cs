@@ -52,25 +52,25 @@ public static class ModelConstants
     /// </summary>
     public const double RefractionAtSunriseDegrees = 0.5667;
 
-    /// <summary>Apparent angular radius of the sun, 0.26667° (Reda &amp; Andreas 2004, NREL/TP-560-34302, eq. 41 and A.2).</summary>
+    /// <summary>Apparent angular radius of the sun, 0.26667° (Reda &amp; Andreas 2004, NREL/TP-560-34302, §3.14 and appendix A.2).</summary>
     public const double SunRadiusDegrees = 0.26667;
 
     /// <summary>
-    /// Reference pressure of the SPA refraction formula, 1010 mbar (Reda &amp; Andreas 2004, eq. 42, after Bennett 1982);
+    /// Reference pressure of the SPA refraction formula, 1010 mbar (Reda &amp; Andreas 2004, §3.14, after Bennett 1982);
     /// used as the "standard atmosphere" when no local pressure is given.
     /// </summary>
     public const double RefractionReferencePressureMillibars = 1010.0;
 
     /// <summary>
-    /// Reference temperature of the SPA refraction formula, 10 °C (Reda &amp; Andreas 2004, eq. 42: the factor 283/(273 + T));
+    /// Reference temperature of the SPA refraction formula, 10 °C (Reda &amp; Andreas 2004, §3.14: the factor 283/(273 + T));
     /// used as the "standard atmosphere" when no local temperature is given.
     /// </summary>
     public const double RefractionReferenceTemperatureCelsius = 10.0;
 
-    /// <summary>Equatorial radius of the Earth, 6 378 140 m (Reda &amp; Andreas 2004, eq. 37–39, IAU 1976 value).</summary>
+    /// <summary>Equatorial radius of the Earth, 6 378 140 m (Reda &amp; Andreas 2004, §3.12, IAU 1976 value).</summary>
     public const double EarthEquatorialRadiusM = 6378140.0;
 
-    /// <summary>Ratio of the Earth's polar to equatorial radius, 0.99664719 (Reda &amp; Andreas 2004, eq. 36–39).</summary>
+    /// <summary>Ratio of the Earth's polar to equatorial radius, 0.99664719 (Reda &amp; Andreas 2004, §3.12).</summary>
     public const double EarthPolarToEquatorialRadius = 0.99664719;
 
     /// <summary>Standard sea-level pressure, 101 325 Pa (ISO 2533 standard atmosphere); scales air mass with site pressure.</summary>

@@ -5,11 +5,15 @@ Reference: PyEphem 4.1.4 (Debian package python3-ephem; libastro, VSOP87 for the
 astronomy library independent of the NREL SPA code.
 
 Outputs (next to this script):
-  sun_positions.csv  topocentric apparent sun zenith and azimuth WITHOUT refraction (observer.pressure = 0),
-                     over 2026 at six sites in both hemispheres, including polar day and polar night.
-                     The test compares them with SPA's e0 (eq. 41, no refraction) because ephem's refraction
-                     model (Saemundsson/Bennett-style, with its own pressure/temperature scaling) is not SPA's
-                     eq. 42, and the two differ most near and below the horizon.
+  sun_positions.csv  topocentric apparent sun zenith and azimuth over 2026 at six sites in both hemispheres,
+                     including polar day and polar night:
+                     zenithDeg         WITHOUT refraction (observer.pressure = 0), compared with SPA's e0 (eq. 41)
+                                       on every row, below the horizon too;
+                     refractedZenithDeg WITH ephem's refraction at 1010 mbar and 10 C (the reference conditions of
+                                       SPA's refraction formula, eq. 42), compared with SPA's refracted zenith only
+                                       where the sun is above the horizon: below it SPA stops refracting at
+                                       e0 < -(0.26667 + 0.5667) deg while ephem's model goes on, so the models
+                                       differ there by design.
   sun_times.csv      sunrise and sunset (sun centre at -0.8333 deg geometric altitude, no refraction: the same
                      horizon as SPA appendix A.2, h0' = -(0.26667 + 0.5667) deg), or the polar day/night flag.
 
@@ -70,8 +74,11 @@ def positions(rows):
                 sun = ephem.Sun(o)
                 zenith = 90.0 - math.degrees(sun.alt)
                 azimuth = math.degrees(sun.az) % 360.0
+                o.pressure = 1010.0
+                o.temp = 10.0
+                refracted = 90.0 - math.degrees(ephem.Sun(o).alt)
                 rows.append([name, lat, lon, elev, utc_string(utc), f"{ephem.delta_t(o.date):.3f}",
-                             f"{zenith:.6f}", f"{azimuth:.6f}"])
+                             f"{zenith:.6f}", f"{azimuth:.6f}", f"{refracted:.6f}"])
 
 
 def times(rows):
@@ -113,7 +120,8 @@ def main():
     p = []
     positions(p)
     write(os.path.join(here, "sun_positions.csv"),
-          ["site", "latitudeDeg", "longitudeDeg", "elevationM", "utc", "deltaTSeconds", "zenithDeg", "azimuthDeg"], p)
+          ["site", "latitudeDeg", "longitudeDeg", "elevationM", "utc", "deltaTSeconds", "zenithDeg", "azimuthDeg",
+           "refractedZenithDeg"], p)
     t = []
     times(t)
     write(os.path.join(here, "sun_times.csv"),

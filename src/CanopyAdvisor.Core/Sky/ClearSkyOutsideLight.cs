@@ -40,6 +40,7 @@ public sealed class ClearSkyOutsideLight : IOutsideLightSource
         ArgumentNullException.ThrowIfNull(zone);
         ArgumentNullException.ThrowIfNull(settings);
         var errors = new List<ValidationError>();
+        SolarPosition.AddLocationErrors(errors, location);
         if (!(settings.LinkeTurbidity > 0 && settings.LinkeTurbidity <= 10))
         {
             errors.Add(new ValidationError("weather.linkeTurbidity", "must be in (0, 10]"));

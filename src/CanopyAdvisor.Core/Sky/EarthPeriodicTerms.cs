@@ -2,9 +2,11 @@ namespace CanopyAdvisor.Core.Sky;
 
 /// <summary>
 /// The Earth periodic terms of the NREL Solar Position Algorithm (Reda &amp; Andreas 2004, NREL/TP-560-34302,
-/// rev. 2008, Table A4.2; an abridged VSOP87 series, Bretagnon &amp; Francou 1988).
+/// rev. 2008, appendix table of Earth periodic terms; an abridged VSOP87 series, Bretagnon &amp; Francou 1988).
 /// </summary>
 /// <remarks>
+/// Values transcribed from the copy of the report's tables in pvlib-python (pvlib/spa.py), checked through the worked
+/// example (L, B, R, Δψ, Δε to the printed precision).
 /// Each series is a flat array of triples (A, B, C); a series contributes Σ A cos(B + C·JME), with JME the
 /// Julian ephemeris millennium. The sums are combined as (X0 + X1·JME + X2·JME² + …) / 10⁸ radians (or AU for R).
 /// </remarks>

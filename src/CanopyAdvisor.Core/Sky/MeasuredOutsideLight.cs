@@ -43,6 +43,7 @@ public sealed class MeasuredOutsideLight : IOutsideLightSource
         ImmutableArray<WeatherRecord> all = [.. records];
         Duration gap = maximumGap ?? DefaultMaximumGap;
         List<ValidationError> errors = Validate(all, gap);
+        SolarPosition.AddLocationErrors(errors, location);
         if (errors.Count > 0)
         {
             throw new InvalidInputException(errors);

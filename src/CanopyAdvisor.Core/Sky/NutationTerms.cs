@@ -2,9 +2,11 @@ namespace CanopyAdvisor.Core.Sky;
 
 /// <summary>
 /// The periodic terms for the nutation in longitude and obliquity of the NREL Solar Position Algorithm
-/// (Reda &amp; Andreas 2004, NREL/TP-560-34302, rev. 2008, Table A4.3; the IAU 1980 series as printed in Meeus 1998).
+/// (Reda &amp; Andreas 2004, NREL/TP-560-34302, rev. 2008, appendix table of nutation terms; the IAU 1980 series as printed in Meeus 1998).
 /// </summary>
 /// <remarks>
+/// Values transcribed from the copy of the report's tables in pvlib-python (pvlib/spa.py), checked through the worked
+/// example (L, B, R, Δψ, Δε to the printed precision).
 /// Row i has multipliers Y0…Y4 of the arguments X0…X4 (mean elongation of the Moon, mean anomaly of the Sun,
 /// mean anomaly of the Moon, Moon's argument of latitude, longitude of the Moon's ascending node) and
 /// coefficients a, b, c, d: Δψ = Σ (a + b·JCE) sin(Σ Xj·Yij), Δε = Σ (c + d·JCE) cos(Σ Xj·Yij), in 0.0001″.

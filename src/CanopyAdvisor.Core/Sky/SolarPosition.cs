@@ -180,7 +180,8 @@ public static class SolarPosition
         && location.ElevationM >= -6500000.0
         && double.IsFinite(location.ElevationM);
 
-    private static void AddLocationErrors(List<ValidationError> errors, GeoLocation location)
+    /// <summary>Adds a problem for each of latitude, longitude and elevation outside the SPA's valid range.</summary>
+    internal static void AddLocationErrors(List<ValidationError> errors, GeoLocation location)
     {
         AddRangeError(errors, "location.latitudeDeg", location.Latitude.Degrees, -90, 90);
         AddRangeError(errors, "location.longitudeDeg", location.Longitude.Degrees, -180, 180);

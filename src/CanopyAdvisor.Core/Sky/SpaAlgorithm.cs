@@ -6,7 +6,8 @@ namespace CanopyAdvisor.Core.Sky;
 /// </summary>
 /// <remarks>
 /// Angles are in degrees here, unlike the rest of Core, so that each line can be checked against the report's
-/// equations and its worked example; the public façade <see cref="SolarPosition"/> converts to <see cref="Geometry.Angle"/>.
+/// equations and its worked example (equation and section numbers are cited from memory of the report's layout);
+/// the public façade <see cref="SolarPosition"/> converts to <see cref="Geometry.Angle"/>.
 /// </remarks>
 internal static class SpaAlgorithm
 {

@@ -1,3 +1,6 @@
+using CanopyAdvisor.Core.Geometry;
+using NodaTime;
+
 namespace CanopyAdvisor.Core.Sky;
 
 /// <summary>
@@ -30,7 +33,7 @@ public static class SunlightPhotons
     public static double PpfdFromLux(double lux) => lux / ModelConstants.DaylightLuxPerMicromolePerSquareMetreSecond;
 
     /// <summary>Converts a broadband irradiance split to the photon units of <see cref="OutsideLight"/>.</summary>
-    public static OutsideLight ToOutsideLight(NodaTime.Instant time, Geometry.Vector3 sunDirection, SolarIrradiance irradiance) =>
+    public static OutsideLight ToOutsideLight(Instant time, Vector3 sunDirection, SolarIrradiance irradiance) =>
         new(
             time,
             sunDirection,

@@ -9,7 +9,8 @@ namespace CanopyAdvisor.Files.Weather;
 
 /// <summary>Reads a site's outside light log from CSV into <see cref="WeatherRecord"/>s.</summary>
 /// <remarks>
-/// <para>Format: a header row, then one row per reading, comma-separated. Columns (names case-insensitive, any order,
+/// <para>Format: a header row, then one row per reading, comma-separated without quoting (no field contains a comma);
+/// fields are trimmed; numbers use a dot as decimal separator. Columns (names case-insensitive, any order,
 /// other columns ignored): <c>timestamp</c> (required; ISO-8601 with a UTC offset, e.g. <c>2026-03-01T12:00:00+01:00</c>
 /// or <c>…Z</c>, seconds and fractions optional), <c>ghiWm2</c> (global horizontal irradiance, W m⁻²) and/or
 /// <c>parUmolM2S</c> (outside PAR, µmol m⁻² s⁻¹); at least one of the two must be present. Either value may be blank in

@@ -93,12 +93,12 @@ public class ClearSkyOutsideLightTests
     public void BadSettings_AreAllReported()
     {
         var ex = Assert.Throws<InvalidInputException>(() => new ClearSkyOutsideLight(
-            Site,
+            Site with { Latitude = Angle.FromDegrees(95) },
             Zone,
             new WeatherSettings(0.0, 1.5),
             new Dictionary<LocalDate, double> { [new LocalDate(2026, 3, 1)] = 0.0 }));
         Assert.Equal(
-            ["weather.linkeTurbidity", "weather.dailyClearness", "weather.clearnessByDate[2026-03-01]"],
+            ["location.latitudeDeg", "weather.linkeTurbidity", "weather.dailyClearness", "weather.clearnessByDate[2026-03-01]"],
             ex.Errors.Select(e => e.Path));
     }
 }

@@ -24,7 +24,7 @@ public class SolarPositionTests
     [Fact]
     public void WorkedExample_IncidenceOnSurface() => Assert.Equal(25.187000, Example.IncidenceAngle.Degrees, 6);
 
-    // Intermediate values of the worked example as printed in the report (Reda & Andreas 2004, Table A5.2),
+    // Intermediate values of the worked example as printed in the report (Reda & Andreas 2004, appendix A.5),
     // as transcribed in the test suite of pvlib-python (pvlib/tests/test_spa.py), a reference implementation;
     // tolerance = the decimals printed.
     public static TheoryData<string, double, int> Intermediates => new()
@@ -127,8 +127,8 @@ public class SolarPositionTests
     public void WorkedExample_ZenithWithoutRefraction() =>
         Assert.Equal(90.0 - 39.872046, Example.ZenithWithoutRefraction.Degrees, 6);
 
-    // Size of the periodic-term tables: Reda & Andreas 2004, Table A4.2 (L0 64 rows, L1 34, L2 20, L3 7, L4 3, L5 1;
-    // B0 5, B1 2; R0 40, R1 10, R2 6, R3 2, R4 1) and Table A4.3 (63 nutation rows).
+    // Size of the periodic-term tables: Reda & Andreas 2004, the Earth periodic terms table (L0 64 rows, L1 34, L2 20, L3 7, L4 3, L5 1;
+    // B0 5, B1 2; R0 40, R1 10, R2 6, R3 2, R4 1) and the nutation table (63 rows); row counts as transcribed from pvlib/spa.py.
     [Fact]
     public void PeriodicTermTables_HaveTheReportsRowCounts()
     {

@@ -85,4 +85,20 @@ public class SunTimesTests
         Assert.InRange(t.TransitHours, 11.5, 12.5);
         Assert.Equal(transitElevationDeg, t.TransitElevation.Degrees, 0.02);
     }
+
+    // On the day daylight saving starts (Europe/Amsterdam, 29 March 2026, 02:00 CET → 03:00 CEST; IANA tzdb), the events
+    // are reported in the offset in force at noon (+02:00) and equal those of a fixed +02:00 zone.
+    [Fact]
+    public void DaylightSavingDay_UsesTheNoonOffset()
+    {
+        var location = new CanopyAdvisor.Core.Sites.GeoLocation(
+            CanopyAdvisor.Core.Geometry.Angle.FromDegrees(52.37), CanopyAdvisor.Core.Geometry.Angle.FromDegrees(4.90), 0);
+        var date = new LocalDate(2026, 3, 29);
+        SunTimes amsterdam = SolarPosition.CalculateSunTimes(new SunTimesInput(date, DateTimeZoneProviders.Tzdb["Europe/Amsterdam"], location));
+        SunTimes fixedOffset = SolarPosition.CalculateSunTimes(new SunTimesInput(date, DateTimeZone.ForOffset(Offset.FromHours(2)), location));
+        Assert.Equal(Offset.FromHours(2), amsterdam.Sunrise!.Value.Offset);
+        Assert.Equal(fixedOffset.Sunrise!.Value.ToInstant(), amsterdam.Sunrise.Value.ToInstant());
+        Assert.Equal(fixedOffset.SunriseHours, amsterdam.SunriseHours);
+        Assert.InRange(amsterdam.SunriseHours!.Value, 7.0, 7.5);
+    }
 }
