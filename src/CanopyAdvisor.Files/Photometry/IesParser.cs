@@ -202,7 +202,7 @@ internal sealed partial class IesParser
             throw Fail(tokens[valuesStart].Line, "every intensity is zero: the file describes no light");
         }
 
-        if (!double.IsFinite(peak * scale) || !(scale > 0))
+        if (!double.IsFinite(peak * scale * 4 * Math.PI) || !(scale > 0))
         {
             throw Fail(countLine, "the intensities overflow once multiplied by the candela multiplier and ballast factor");
         }
@@ -528,9 +528,9 @@ internal sealed partial class IesParser
     {
         for (int k = 1; k < angles.Length; k++)
         {
-            if (!(angles[k] > angles[k - 1]))
+            if (!(angles[k] - angles[k - 1] >= AngleTolerance))
             {
-                AddError(tokens[start + k].Line, $"{what} angles must increase: {Fmt(angles[k])} follows {Fmt(angles[k - 1])}");
+                AddError(tokens[start + k].Line, $"{what} angles must increase (by at least {AngleTolerance}°): {Fmt(angles[k])} follows {Fmt(angles[k - 1])}");
                 return false;
             }
         }
