@@ -239,7 +239,7 @@ internal sealed partial class IesParser
         };
     }
 
-    [GeneratedRegex(@"^IES(NA)?\s*:\s*LM-63-(\d{4})\s*$", RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^IES(NA)?\s*:\s*LM-63-(\d{4})\b", RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
     private static partial Regex FormatLinePattern();
 
     private static bool TryTiltValue(string line, out string value)
