@@ -244,4 +244,15 @@ public class IesReadBackTests
             Directory.Delete(folder, recursive: true);
         }
     }
+
+    // Isotropic source: Φ = 4π I (solid angle of the sphere); a constant is interpolated exactly, so only rounding remains.
+    [Fact]
+    public void Isotropic_full_sphere_file_has_four_pi_flux()
+    {
+        var vertical = IesWriter.Range(0, 180, 10);
+        var grid = new IesGrid(vertical, [0], [[.. vertical.Select(_ => 100.0)]]);
+        IesPhotometry read = WriteAndRead(grid);
+        Assert.Equal(400 * Math.PI, read.TotalPhotonFluxMicromolesPerSecond, 1e-9);
+        Assert.Equal(1 / (4 * Math.PI), read.Distribution.IntensityPerUnitFlux(2.5, 4), 12);
+    }
 }
