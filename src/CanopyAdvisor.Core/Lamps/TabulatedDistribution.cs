@@ -147,17 +147,35 @@ public sealed class TabulatedDistribution : BeamDistribution
             }
         }
 
-        InputIntegral = IntegrateInterpolant(raw);
-        if (!(InputIntegral > 0) || !double.IsFinite(InputIntegral))
+        // Work relative to the peak so that tiny (even subnormal) or huge inputs normalise without overflow.
+        double peak = 0.0;
+        foreach (double v in raw)
         {
-            throw new InvalidInputException("values", "the intensities integrate to zero (or overflow): no light is emitted");
+            peak = Math.Max(peak, v);
+        }
+
+        if (!(peak > 0))
+        {
+            throw new InvalidInputException("values", "are all zero: no light is emitted");
+        }
+
+        double[] relative = new double[raw.Length];
+        for (int i = 0; i < raw.Length; i++)
+        {
+            relative[i] = raw[i] / peak;
+        }
+
+        double relativeIntegral = IntegrateInterpolant(relative);
+        InputIntegral = relativeIntegral * peak;
+        if (!(relativeIntegral > 0) || !double.IsFinite(InputIntegral))
+        {
+            throw new InvalidInputException("values", "integrate to zero or overflow: no usable light distribution");
         }
 
         normalised = new double[raw.Length];
-        double scale = 1.0 / InputIntegral;
         for (int i = 0; i < raw.Length; i++)
         {
-            normalised[i] = raw[i] * scale;
+            normalised[i] = relative[i] / relativeIntegral;
         }
 
         IsAxiallySymmetric = aroundCount == 1 || AllRowsEqual(raw);
