@@ -591,7 +591,9 @@ public sealed class SiteFileReader
                 o.Error("type", $"unknown lamp type '{typeName}' ({defined})");
             }
 
-            return (LampType.Unread, o.PathOf("type"));
+            // Unknown (reported here) or defined but unreadable (reported at its definition): the draft's checks of
+            // this stand-in are then dropped as overlapping the error already reported.
+            return (LampType.Unread, typeName is not null && definedLampTypes.Contains(typeName) ? JsonObjectReader.Child("lampTypes", typeName) : o.PathOf("type"));
         }
 
         private static (LampAim Aim, double Dimming, LampSchedule Schedule) ReadLampSettings(JsonObjectReader o)

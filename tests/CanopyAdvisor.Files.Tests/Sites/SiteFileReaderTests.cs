@@ -117,6 +117,27 @@ public sealed class SiteFileReaderTests : IDisposable
     }
 
     [Fact]
+    public void A_lamp_type_that_cannot_be_read_is_reported_only_at_its_definition()
+    {
+        string json = SiteJson.With(SiteJson.Glasshouse, ("lampTypes.top", "5"));
+
+        var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "test.json", null));
+
+        Assert.Equal("lampTypes.top: must be an object, got the number 5", Assert.Single(e.Errors).ToString());
+    }
+
+    [Fact]
+    public void A_number_too_large_for_a_double_is_not_finite()
+    {
+        // 1e400 exceeds the largest IEEE 754 double (about 1.8e308).
+        string json = SiteJson.With(SiteJson.Glasshouse, ("location.elevationM", "1e400"));
+
+        var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "test.json", null));
+
+        Assert.Equal("location.elevationM: must be a finite number", Assert.Single(e.Errors).ToString());
+    }
+
+    [Fact]
     public void A_structure_that_cannot_be_read_does_not_hide_range_errors_elsewhere()
     {
         string json = SiteJson.With(SiteJson.Glasshouse, ("structure.kind", "\"tunnel\""), ("lamps[0].dimming", "3"));
