@@ -89,7 +89,8 @@ public class SiteFileReaderBadFileTests
         { "glasshouse without weather (README: required for a glasshouse)", G, "weather", SiteJson.Remove, "weather", "is required" },
 
         // The shape of the file (README: format).
-        { "unknown property (README: no unknown names)", G, "benches[0].widht", "2", "benches[0].widht", "unknown property (expected one of:" },
+        { "unknown property (README: no unknown names)", G, "benches[0].colour", "2", "benches[0].colour", "unknown property (expected one of: canopy, footprint, id," },
+        { "misspelt property gets a hint (README: no unknown names)", G, "benches[0].footprint.widhtM", "2", "benches[0].footprint.widhtM", "unknown property; did you mean 'widthM'?" },
         { "integer given as text (README: bayCount is an integer)", G, "structure.bayCount", "\"six\"", "structure.bayCount", "must be an integer, got the string \"six\"" },
         { "integer given as a fraction (README: bayCount is an integer)", G, "structure.bayCount", "2.5", "structure.bayCount", "must be an integer, got 2.5" },
         { "number given as text (README: numbers)", G, "location.elevationM", "\"low\"", "location.elevationM", "must be a number, got the string \"low\"" },
