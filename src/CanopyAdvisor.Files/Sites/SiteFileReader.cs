@@ -103,6 +103,9 @@ public sealed class SiteFileReader
     private sealed class Parsing(IBeamFactory beams, string? baseDirectory)
     {
         private readonly List<ValidationError> errors = [];
+
+        // Places whose value is unknown because of a problem reported elsewhere; draft errors there are dropped.
+        private readonly List<string> unknown = [];
         private readonly Dictionary<string, Cover> coverTypes = new(StringComparer.Ordinal);
         private readonly Dictionary<string, LampType> lampTypes = new(StringComparer.Ordinal);
         private readonly HashSet<string> definedCoverTypes = new(StringComparer.Ordinal);
@@ -183,7 +186,8 @@ public sealed class SiteFileReader
                 found.AddRange(SiteValidator.CheckCover(cover, JsonObjectReader.Child("coverTypes", coverName)));
             }
 
-            List<ValidationError> all = [.. errors, .. found.Where(f => !errors.Any(e => Overlaps(e.Path, f.Path)))];
+            List<string> reported = [.. errors.Select(e => e.Path), .. unknown];
+            List<ValidationError> all = [.. errors, .. found.Where(f => !reported.Any(r => Overlaps(r, f.Path)))];
             all = ShortenRows(all.Distinct().ToList());
             if (all.Count > 0)
             {
@@ -398,7 +402,17 @@ public sealed class SiteFileReader
                 }
 
                 (BeamDistribution beam, double? filePpf) = ReadBeam(o);
-                double? ppf = o.Number("ppfUmolPerS", required: filePpf is null);
+
+                // An IES beam brings its own flux (if its file fails, that is reported there, not as a missing PPF).
+                bool ies = value.ValueKind == JsonValueKind.Object
+                    && value.TryGetProperty("beam", out JsonElement b) && b.ValueKind == JsonValueKind.Object
+                    && b.TryGetProperty("kind", out JsonElement k) && k.ValueKind == JsonValueKind.String && k.GetString() == "ies";
+                double? ppf = o.Number("ppfUmolPerS", required: !ies);
+                if (ies && ppf is null && filePpf is null)
+                {
+                    unknown.Add(o.PathOf("ppfUmolPerS"));
+                }
+
                 double? watts = o.Number("watts");
                 JsonObjectReader? bands = o.Object("bands");
                 double? blue = bands?.Number("blue");
