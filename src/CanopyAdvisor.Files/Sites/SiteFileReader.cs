@@ -77,7 +77,8 @@ public sealed class SiteFileReader
         JsonDocument document;
         try
         {
-            document = JsonDocument.Parse(json, new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Disallow, AllowTrailingCommas = false });
+            // A byte-order mark left at the start of the text (files saved by some editors) is not JSON; skip it.
+            document = JsonDocument.Parse(json.AsMemory(json.StartsWith('\uFEFF') ? 1 : 0), new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Disallow, AllowTrailingCommas = false });
         }
         catch (JsonException e)
         {

@@ -183,6 +183,14 @@ public sealed class SiteFileReaderTests : IDisposable
     }
 
     [Fact]
+    public void A_leading_byte_order_mark_is_ignored()
+    {
+        // U+FEFF at the start of a text is a byte-order mark, not content (Unicode standard, ch. 23.8).
+        Site site = new SiteFileReader(new TestBeams()).Parse("\uFEFF" + SiteJson.IndoorRoom, "room.json", null);
+        Assert.Equal("test-room", site.Id);
+    }
+
+    [Fact]
     public void Root_must_be_an_object()
     {
         var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse("[]", "f.json", null));
