@@ -76,8 +76,19 @@ public sealed class LampFrame
     public double IntensityPerUnitFlux(BeamDistribution distribution, Vector3 worldDirection)
     {
         ArgumentNullException.ThrowIfNull(distribution);
-        ToLampRadians(worldDirection, out double polar, out double around);
-        return distribution.IntensityPerUnitFlux(polar, around);
+        double z = Vector3.Dot(worldDirection, Axis);
+        double x = Vector3.Dot(worldDirection, Reference);
+        double y = Vector3.Dot(worldDirection, Lateral);
+        double polar = Math.Atan2(Math.Sqrt((x * x) + (y * y)), z);
+
+        // Called millions of times when a site is compiled: skip the second atan2 when the answer cannot depend on it.
+        if (distribution.IsAxiallySymmetric)
+        {
+            return distribution.IntensityPerUnitFlux(polar, 0.0);
+        }
+
+        double around = Math.Atan2(y, x);
+        return distribution.IntensityPerUnitFlux(polar, around < 0 ? around + (2.0 * Math.PI) : around);
     }
 
     private void ToLampRadians(Vector3 d, out double polar, out double around)

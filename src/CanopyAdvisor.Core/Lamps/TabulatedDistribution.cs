@@ -27,6 +27,9 @@ public sealed class TabulatedDistribution : BeamDistribution
 {
     private const double TwoPi = 2.0 * Math.PI;
 
+    // Closer nodes would make 1/width overflow or lose all precision.
+    private const double MinimumStepRadians = 1e-9;
+
     private readonly double[] polar;
     private readonly double[] polarInverseWidth;
     private readonly bool polarUniform;
@@ -43,9 +46,9 @@ public sealed class TabulatedDistribution : BeamDistribution
     private readonly int aroundCount;
 
     /// <summary>Creates the distribution from a grid of intensities in any unit (they are normalised).</summary>
-    /// <param name="polarAngles">Polar angles from the axis, strictly increasing, within [0°, 180°], at least two.</param>
+    /// <param name="polarAngles">Polar angles from the axis, strictly increasing (steps ≥ 1e-9 rad), within [0°, 180°], at least two.</param>
     /// <param name="aroundAngles">
-    /// Angles about the axis, strictly increasing, within [0°, 360°], spanning at most 360°; one angle means axially symmetric.
+    /// Angles about the axis, strictly increasing (steps ≥ 1e-9 rad), within [0°, 360°], spanning at most 360°; one angle means axially symmetric.
     /// </param>
     /// <param name="values">Intensities, finite and ≥ 0, indexed [around index, polar index], not all zero.</param>
     /// <exception cref="InvalidInputException">When any of the above does not hold (every problem is listed).</exception>
@@ -144,17 +147,35 @@ public sealed class TabulatedDistribution : BeamDistribution
             }
         }
 
-        InputIntegral = IntegrateInterpolant(raw);
-        if (!(InputIntegral > 0) || !double.IsFinite(InputIntegral))
+        // Work relative to the peak so that tiny (even subnormal) or huge inputs normalise without overflow.
+        double peak = 0.0;
+        foreach (double v in raw)
         {
-            throw new InvalidInputException("values", "the intensities integrate to zero (or overflow): no light is emitted");
+            peak = Math.Max(peak, v);
+        }
+
+        if (!(peak > 0))
+        {
+            throw new InvalidInputException("values", "are all zero: no light is emitted");
+        }
+
+        double[] relative = new double[raw.Length];
+        for (int i = 0; i < raw.Length; i++)
+        {
+            relative[i] = raw[i] / peak;
+        }
+
+        double relativeIntegral = IntegrateInterpolant(relative);
+        InputIntegral = relativeIntegral * peak;
+        if (!(relativeIntegral > 0) || !double.IsFinite(InputIntegral))
+        {
+            throw new InvalidInputException("values", "integrate to zero or overflow: no usable light distribution");
         }
 
         normalised = new double[raw.Length];
-        double scale = 1.0 / InputIntegral;
         for (int i = 0; i < raw.Length; i++)
         {
-            normalised[i] = raw[i] * scale;
+            normalised[i] = relative[i] / relativeIntegral;
         }
 
         IsAxiallySymmetric = aroundCount == 1 || AllRowsEqual(raw);
@@ -382,9 +403,9 @@ public sealed class TabulatedDistribution : BeamDistribution
                 return;
             }
 
-            if (i > 0 && !(r > angles[i - 1].Radians))
+            if (i > 0 && !(r - angles[i - 1].Radians >= MinimumStepRadians))
             {
-                errors.Add(new($"{path}[{i}]", $"must be greater than the angle before it ({angles[i - 1]}), got {angles[i]}"));
+                errors.Add(new($"{path}[{i}]", $"must exceed the angle before it ({angles[i - 1]}) by at least 1e-9 rad, got {angles[i]}"));
                 return;
             }
         }

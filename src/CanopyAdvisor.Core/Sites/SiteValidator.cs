@@ -10,7 +10,7 @@ namespace CanopyAdvisor.Core.Sites;
 /// <para>
 /// Two kinds of check: the range of each value (sizes &gt; 0, fractions in [0, 1], latitude within ±90°, …) and the
 /// geometry of the parts together (benches inside the structure and under its gutters or ceiling, lamps inside
-/// the structure and outside every canopy, bays filling the structure's width, unique ids). Paths use the site
+/// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids). Paths use the site
 /// file's names (see <see cref="SitePaths"/>). The same problem reported for several lamps that share a type or
 /// several surfaces that share a cover is listed once.
 /// </para>
@@ -85,6 +85,8 @@ public static class SiteValidator
             errors.AddRange(CheckBench(site.Benches[i], paths.Bench(i)));
             errors.AddRange(CheckBenchFits(site.Benches[i], paths.Bench(i), site.Structure));
         }
+
+        errors.AddRange(CheckBenchesApart(site.Benches, paths.Bench));
 
         for (int i = 0; i < site.Lamps.Length; i++)
         {
@@ -261,6 +263,31 @@ public static class SiteValidator
         return errors;
     }
 
+    /// <summary>
+    /// No two benches take up the same space: benches whose footprints overlap by more than
+    /// <see cref="GeometryToleranceM"/> must be at different heights (rack tiers), with one's canopy top at or below
+    /// the other's surface.
+    /// </summary>
+    public static IEnumerable<ValidationError> CheckBenchesApart(IReadOnlyList<Bench> benches, Func<int, string> path)
+    {
+        ArgumentNullException.ThrowIfNull(benches);
+        ArgumentNullException.ThrowIfNull(path);
+        for (int j = 1; j < benches.Count; j++)
+        {
+            for (int i = 0; i < j; i++)
+            {
+                Bench a = benches[i];
+                Bench b = benches[j];
+                bool apartInHeight = a.SurfaceHeightM + a.Canopy.HeightM <= b.SurfaceHeightM + GeometryToleranceM
+                    || b.SurfaceHeightM + b.Canopy.HeightM <= a.SurfaceHeightM + GeometryToleranceM;
+                if (!apartInHeight && FootprintsOverlap(a.Footprint, b.Footprint, GeometryToleranceM))
+                {
+                    yield return new($"{path(j)}.footprint", $"bench '{b.Id}' overlaps bench '{a.Id}' ({path(i)}) at the same height");
+                }
+            }
+        }
+    }
+
     /// <summary>The photon output of a lamp (or lamp type): PPF &gt; 0, watts ≥ 0, bands ≥ 0 with blue + green + red = 1 (±0.01).</summary>
     public static IEnumerable<ValidationError> CheckLampOutput(double ppfMicromolesPerSecond, double watts, BandFractions bands, string path)
     {
@@ -409,6 +436,41 @@ public static class SiteValidator
 
             i++;
         }
+    }
+
+    /// <summary>
+    /// Whether two rectangles overlap by more than a tolerance, by the separating axis theorem: convex shapes are
+    /// disjoint exactly when their projections onto some edge normal do not overlap (for rectangles, 4 axes).
+    /// </summary>
+    private static bool FootprintsOverlap(Footprint a, Footprint b, double toleranceM)
+    {
+        Vector3[] ca = Corners(a);
+        Vector3[] cb = Corners(b);
+        foreach (Vector3 axis in new[] { a.AxisDirection, a.WidthDirection, b.AxisDirection, b.WidthDirection })
+        {
+            (double minA, double maxA) = Project(ca, axis);
+            (double minB, double maxB) = Project(cb, axis);
+            if (maxA <= minB + toleranceM || maxB <= minA + toleranceM)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    private static (double Min, double Max) Project(Vector3[] corners, Vector3 axis)
+    {
+        double min = double.PositiveInfinity;
+        double max = double.NegativeInfinity;
+        foreach (Vector3 c in corners)
+        {
+            double d = Vector3.Dot(c, axis);
+            min = Math.Min(min, d);
+            max = Math.Max(max, d);
+        }
+
+        return (min, max);
     }
 
     private static Vector3[] Corners(Footprint f) =>

@@ -202,7 +202,7 @@ internal sealed partial class IesParser
             throw Fail(tokens[valuesStart].Line, "every intensity is zero: the file describes no light");
         }
 
-        if (!double.IsFinite(peak * scale) || !(scale > 0))
+        if (!double.IsFinite(peak * scale * 4 * Math.PI) || !(scale > 0))
         {
             throw Fail(countLine, "the intensities overflow once multiplied by the candela multiplier and ballast factor");
         }
@@ -239,7 +239,7 @@ internal sealed partial class IesParser
         };
     }
 
-    [GeneratedRegex(@"^IES(NA)?\s*:\s*LM-63-(\d{4})\s*$", RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^IES(NA)?\s*:\s*LM-63-(\d{4})\b", RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
     private static partial Regex FormatLinePattern();
 
     private static bool TryTiltValue(string line, out string value)
@@ -528,9 +528,9 @@ internal sealed partial class IesParser
     {
         for (int k = 1; k < angles.Length; k++)
         {
-            if (!(angles[k] > angles[k - 1]))
+            if (!(angles[k] - angles[k - 1] >= AngleTolerance))
             {
-                AddError(tokens[start + k].Line, $"{what} angles must increase: {Fmt(angles[k])} follows {Fmt(angles[k - 1])}");
+                AddError(tokens[start + k].Line, $"{what} angles must increase (by at least {AngleTolerance}°): {Fmt(angles[k])} follows {Fmt(angles[k - 1])}");
                 return false;
             }
         }

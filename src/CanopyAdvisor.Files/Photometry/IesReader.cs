@@ -87,4 +87,27 @@ public static class IesReader
 
         return Read(text.ToString(), fileName, options);
     }
+
+    /// <summary>Reads an IES file from disk; error paths use the file's name (without its folder).</summary>
+    /// <param name="path">Path of the file.</param>
+    /// <param name="options">The unit of the values (never guessed).</param>
+    /// <exception cref="InvalidInputException">When the file cannot be opened, or the options or the file are invalid.</exception>
+    public static IesPhotometry ReadFile(string path, IesReadOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        string name = Path.GetFileName(path);
+        try
+        {
+            using var reader = new StreamReader(path, detectEncodingFromByteOrderMarks: true);
+            return Read(reader, name, options);
+        }
+        catch (IOException e)
+        {
+            throw new InvalidInputException(name, $"cannot be read: {e.Message}");
+        }
+        catch (UnauthorizedAccessException e)
+        {
+            throw new InvalidInputException(name, $"cannot be read: {e.Message}");
+        }
+    }
 }

@@ -205,8 +205,17 @@ internal sealed partial class JsonObjectReader
     {
         foreach (string name in order.Where(n => !known.Contains(n)))
         {
+            string? near = known
+                .Select(k => (Name: k, Distance: EditDistance(name.ToUpperInvariant(), k.ToUpperInvariant())))
+                .Where(k => k.Distance <= 2)
+                .OrderBy(k => k.Distance)
+                .ThenBy(k => k.Name, StringComparer.Ordinal)
+                .Select(k => k.Name)
+                .FirstOrDefault();
             string expected = string.Join(", ", known.Order(StringComparer.Ordinal));
-            errors.Add(new(PathOf(name), $"unknown property (expected one of: {expected})"));
+            errors.Add(new(
+                PathOf(name),
+                near is null ? $"unknown property (expected one of: {expected})" : $"unknown property; did you mean '{near}'? (expected one of: {expected})"));
         }
     }
 
@@ -232,6 +241,26 @@ internal sealed partial class JsonObjectReader
         JsonValueKind.False => "false",
         _ => "null",
     };
+
+    /// <summary>Levenshtein distance (insertions, deletions, substitutions), for "did you mean" hints.</summary>
+    private static int EditDistance(string a, string b)
+    {
+        int[] previous = Enumerable.Range(0, b.Length + 1).ToArray();
+        int[] current = new int[b.Length + 1];
+        for (int i = 1; i <= a.Length; i++)
+        {
+            current[0] = i;
+            for (int j = 1; j <= b.Length; j++)
+            {
+                int substitution = previous[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1);
+                current[j] = Math.Min(substitution, Math.Min(previous[j], current[j - 1]) + 1);
+            }
+
+            (previous, current) = (current, previous);
+        }
+
+        return previous[b.Length];
+    }
 
     [GeneratedRegex("^[A-Za-z0-9_-]+$")]
     private static partial Regex PlainName();

@@ -62,4 +62,17 @@ public class PointSourceIrradianceTests
         Assert.Throws<InvalidInputException>(() =>
             PointSourceIrradiance.Normal(Lamp, LampFrame.Down, IsotropicDistribution.Instance, 1000, Lamp));
     }
+
+    // Aimed lamp, worked by hand from E = I cos i / d²: Lambertian lamp at (0, 0, 1) tilted 45° toward east (yaw 90°)
+    // points straight at (1, 0, 0), so I = Φ/π, d² = 2 and cos i = 1/√2 on the horizontal: E = 1000/(2√2 π) = 112.54.
+    // Straight below it the direction is 45° off axis: I = Φ cos 45°/π, d = 1, cos i = 1: E = 225.08.
+    [Theory]
+    [InlineData(1, 112.54)]
+    [InlineData(0, 225.08)]
+    public void Tilted_lamp_follows_the_lamp_law(double x, double expected)
+    {
+        var frame = new LampFrame(new LampAim(Angle.FromDegrees(90), Angle.FromDegrees(45), Angle.Zero));
+        double e = PointSourceIrradiance.OnSurface(new Vector3(0, 0, 1), frame, LambertianDistribution.Instance, 1000, new Vector3(x, 0, 0), Vector3.UnitZ);
+        Assert.Equal(expected, e, 2);
+    }
 }

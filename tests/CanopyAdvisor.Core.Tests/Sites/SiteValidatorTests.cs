@@ -125,6 +125,34 @@ public class SiteValidatorTests
         Assert.Equal("coverTypes.glass.refractiveIndex: must be ≥ 1, got 0.5", only.ToString());
     }
 
+    [Theory]
+    [InlineData(3.0, 0.75, true, "overlap 0.8 m side by side at the same height")]
+    [InlineData(3.8, 0.75, false, "edge to edge (b1 spans x 2–3.8): touching is not overlapping")]
+    [InlineData(3.79, 0.75, false, "1 cm overlap is within the tolerance")]
+    [InlineData(2.0, 1.05, false, "a tier whose surface is at b1's canopy top (0.75 + 0.3)")]
+    [InlineData(2.0, 1.0, true, "a tier inside b1's canopy")]
+    public void Benches_must_not_share_space(double cornerXM, double surfaceHeightM, bool overlap, string reason)
+    {
+        Site site = ValidSite();
+        Bench second = site.Benches[0] with { Id = "b2", Footprint = site.Benches[0].Footprint with { CornerXM = cornerXM }, SurfaceHeightM = surfaceHeightM };
+        site = site with { Benches = [site.Benches[0], second], Lamps = [Lamp("l1", new Vector3(10, 10, 5))] };
+
+        IReadOnlyList<ValidationError> errors = SiteValidator.Validate(site);
+
+        Assert.True(overlap == errors.Any(e => e.Path == "benches[1].footprint" && e.Message == "bench 'b2' overlaps bench 'b1' (benches[0]) at the same height"), reason);
+    }
+
+    [Fact]
+    public void Rotated_benches_overlap_when_they_cross()
+    {
+        // A 20 m × 1.8 m bench along north, and one along east crossing it at its middle (separating axis theorem).
+        Site site = ValidSite();
+        Bench cross = site.Benches[0] with { Id = "b2", Footprint = new Footprint(1, 13, Angle.FromDegrees(90), 6, 1.8) };
+        site = site with { Benches = [site.Benches[0], cross], Lamps = [Lamp("l1", new Vector3(10, 10, 5))] };
+
+        Assert.Contains(SiteValidator.Validate(site), e => e.Path == "benches[1].footprint");
+    }
+
     [Fact]
     public void Lamp_in_a_canopy_is_named_with_the_bench()
     {

@@ -218,4 +218,41 @@ public class IesReadBackTests
 
         return text.ToString();
     }
+
+    [Fact]
+    public void Reads_from_disk_and_names_the_file_in_errors()
+    {
+        string folder = Path.Combine(Path.GetTempPath(), "canopy-ies-" + Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(folder);
+        try
+        {
+            string good = Path.Combine(folder, "good.ies");
+            IesGrid grid = IesWriter.SampleTypeC(LambertianDistribution.Instance, 1000, Vertical90, [0]);
+            File.WriteAllText(good, IesWriter.WriteTypeC(grid, new IesWriteSettings()));
+            Assert.Equal("good.ies", IesReader.ReadFile(good, IesReadOptions.Photon).FileName);
+
+            string bad = Path.Combine(folder, "bad.ies");
+            File.WriteAllText(bad, "IES:LM-63-2019\nTILT=NONE\n1 -1 1\n");
+            var e = Assert.Throws<Core.Validation.InvalidInputException>(() => IesReader.ReadFile(bad, IesReadOptions.Photon));
+            Assert.StartsWith("bad.ies:3", e.Errors[0].Path, StringComparison.Ordinal);
+
+            var missing = Assert.Throws<Core.Validation.InvalidInputException>(() => IesReader.ReadFile(Path.Combine(folder, "none.ies"), IesReadOptions.Photon));
+            Assert.Equal("none.ies", missing.Errors[0].Path);
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    // Isotropic source: Φ = 4π I (solid angle of the sphere); a constant is interpolated exactly, so only rounding remains.
+    [Fact]
+    public void Isotropic_full_sphere_file_has_four_pi_flux()
+    {
+        var vertical = IesWriter.Range(0, 180, 10);
+        var grid = new IesGrid(vertical, [0], [[.. vertical.Select(_ => 100.0)]]);
+        IesPhotometry read = WriteAndRead(grid);
+        Assert.Equal(400 * Math.PI, read.TotalPhotonFluxMicromolesPerSecond, 1e-9);
+        Assert.Equal(1 / (4 * Math.PI), read.Distribution.IntensityPerUnitFlux(2.5, 4), 12);
+    }
 }

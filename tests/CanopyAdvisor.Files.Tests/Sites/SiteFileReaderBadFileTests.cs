@@ -60,6 +60,12 @@ public class SiteFileReaderBadFileTests
             "benches[1].id", "duplicate bench id 'b1' (first used at benches[0])"
         },
 
+        {
+            "two benches in the same space (README: benches apart)", G, "benches[1]",
+            """{ "id": "b2", "footprint": { "cornerXM": 3, "cornerYM": 2, "axisAzimuthDeg": 0, "lengthM": 10, "widthM": 1.8 }, "surfaceHeightM": 0.75, "canopy": { "heightM": 0.3, "sensingDepthM": 0.05, "leafAreaDensityM2PerM3": 6 }, "samplesAlongLength": 5, "samplesAcrossWidth": 2 }""",
+            "benches[1].footprint", "bench 'b2' overlaps bench 'b1' (benches[0]) at the same height"
+        },
+
         // Lamps (README rules; lamps hang inside the structure).
         { "lamp inside a bench's canopy (README)", G, "lamps[0]", """{ "id": "low", "type": "side", "xM": 3, "yM": 5, "zM": 0.9, "schedule": { "on": "00:00", "off": "00:00" } }""", "lamps[0]", "lamp 'low' at (3, 5, 0.9) m is inside the canopy of bench 'b1'" },
         { "lamp west of the west wall (README: lamps inside)", G, "lamps[0].xM", "-3", "lamps[0]", "is outside the structure's footprint" },
@@ -89,7 +95,8 @@ public class SiteFileReaderBadFileTests
         { "glasshouse without weather (README: required for a glasshouse)", G, "weather", SiteJson.Remove, "weather", "is required" },
 
         // The shape of the file (README: format).
-        { "unknown property (README: no unknown names)", G, "benches[0].widht", "2", "benches[0].widht", "unknown property (expected one of:" },
+        { "unknown property (README: no unknown names)", G, "benches[0].colour", "2", "benches[0].colour", "unknown property (expected one of: canopy, footprint, id," },
+        { "misspelt property gets a hint (README: no unknown names)", G, "benches[0].footprint.widhtM", "2", "benches[0].footprint.widhtM", "unknown property; did you mean 'widthM'?" },
         { "integer given as text (README: bayCount is an integer)", G, "structure.bayCount", "\"six\"", "structure.bayCount", "must be an integer, got the string \"six\"" },
         { "integer given as a fraction (README: bayCount is an integer)", G, "structure.bayCount", "2.5", "structure.bayCount", "must be an integer, got 2.5" },
         { "number given as text (README: numbers)", G, "location.elevationM", "\"low\"", "location.elevationM", "must be a number, got the string \"low\"" },

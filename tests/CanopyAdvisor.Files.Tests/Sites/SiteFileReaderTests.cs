@@ -117,6 +117,27 @@ public sealed class SiteFileReaderTests : IDisposable
     }
 
     [Fact]
+    public void A_lamp_type_that_cannot_be_read_is_reported_only_at_its_definition()
+    {
+        string json = SiteJson.With(SiteJson.Glasshouse, ("lampTypes.top", "5"));
+
+        var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "test.json", null));
+
+        Assert.Equal("lampTypes.top: must be an object, got the number 5", Assert.Single(e.Errors).ToString());
+    }
+
+    [Fact]
+    public void A_number_too_large_for_a_double_is_not_finite()
+    {
+        // 1e400 exceeds the largest IEEE 754 double (about 1.8e308).
+        string json = SiteJson.With(SiteJson.Glasshouse, ("location.elevationM", "1e400"));
+
+        var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "test.json", null));
+
+        Assert.Equal("location.elevationM: must be a finite number", Assert.Single(e.Errors).ToString());
+    }
+
+    [Fact]
     public void A_structure_that_cannot_be_read_does_not_hide_range_errors_elsewhere()
     {
         string json = SiteJson.With(SiteJson.Glasshouse, ("structure.kind", "\"tunnel\""), ("lamps[0].dimming", "3"));
@@ -159,6 +180,14 @@ public sealed class SiteFileReaderTests : IDisposable
     {
         var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(new TestBeams()).Parse(json, "f.json", null));
         Assert.True(e.Errors[0].Message.StartsWith("malformed JSON", StringComparison.Ordinal), label);
+    }
+
+    [Fact]
+    public void A_leading_byte_order_mark_is_ignored()
+    {
+        // U+FEFF at the start of a text is a byte-order mark, not content (Unicode standard, ch. 23.8).
+        Site site = new SiteFileReader(new TestBeams()).Parse("\uFEFF" + SiteJson.IndoorRoom, "room.json", null);
+        Assert.Equal("test-room", site.Id);
     }
 
     [Fact]
@@ -222,11 +251,14 @@ public sealed class SiteFileReaderTests : IDisposable
         File.WriteAllText(Path.Combine(folder, "bad.ies"), "IESNA:LM-63-2002");
         var beams = new TestBeams();
         beams.BadIesFiles.Add("bad.ies");
-        string json = SiteJson.With(SiteJson.Glasshouse, ("lampTypes.top.beam", beamJson));
+        string json = SiteJson.With(SiteJson.Glasshouse, ("lampTypes.top.beam", beamJson), ("lampTypes.top.ppfUmolPerS", SiteJson.Remove));
 
         var e = Assert.Throws<InvalidInputException>(() => new SiteFileReader(beams).Parse(json, "site.json", folder));
 
-        Assert.Contains(e.Errors, x => x.Path == expectedPath && x.Message.Contains(expectedMessage, StringComparison.Ordinal));
+        // Only the IES problem: no missing PPF, nothing about the lamps that use the type.
+        ValidationError only = Assert.Single(e.Errors);
+        Assert.Equal(expectedPath, only.Path);
+        Assert.Contains(expectedMessage, only.Message, StringComparison.Ordinal);
     }
 
     [Fact]
