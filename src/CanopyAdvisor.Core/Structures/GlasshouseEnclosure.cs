@@ -58,6 +58,11 @@ public sealed class GlasshouseEnclosure : IEnclosure
     private readonly Vector3 axis;
     private readonly Vector3 across;
     private readonly double roofRise;
+    private readonly double length;
+    private readonly double width;
+    private readonly double bay;
+    private readonly double gutter;
+    private readonly int bayCount;
     private readonly double sinSlope;
     private readonly double cosSlope;
     private readonly GlazingOptics roofOptics;
@@ -76,6 +81,11 @@ public sealed class GlasshouseEnclosure : IEnclosure
         axis = fp.AxisDirection;
         across = fp.WidthDirection;
         roofRise = glasshouse.RoofSlope.Tan();
+        length = fp.LengthM;
+        width = fp.WidthM;
+        bay = glasshouse.BayWidthM;
+        gutter = glasshouse.GutterHeightM;
+        bayCount = glasshouse.BayCount;
         sinSlope = glasshouse.RoofSlope.Sin();
         cosSlope = glasshouse.RoofSlope.Cos();
         roofOptics = new GlazingOptics(glasshouse.Roof);
@@ -85,10 +95,6 @@ public sealed class GlasshouseEnclosure : IEnclosure
         backOptics = new GlazingOptics(glasshouse.BackWall);
 
         var facetList = new List<(EnvelopeFacet Facet, FacetGeometry Geometry)>();
-        double length = fp.LengthM;
-        double width = fp.WidthM;
-        double bay = glasshouse.BayWidthM;
-        double gutter = glasshouse.GutterHeightM;
         double rise = glasshouse.RidgeHeightM - gutter;
         Vector3 up = Vector3.UnitZ;
 
@@ -157,7 +163,10 @@ public sealed class GlasshouseEnclosure : IEnclosure
             return 0;
         }
 
-        return Contains(origin) ? unshadedFraction * EnvelopeTransmittance(origin, d) : 1;
+        Vector3 r = origin - corner;
+        double u0 = Vector3.Dot(r, axis);
+        double v0 = Vector3.Dot(r, across);
+        return ContainsLocal(u0, v0, origin.Z) ? unshadedFraction * EnvelopeTransmittance(origin, d, u0, v0) : 1;
     }
 
     /// <summary>Whether an opaque envelope facet or an obstruction lies on the segment between two points (ends excluded).</summary>
@@ -192,17 +201,12 @@ public sealed class GlasshouseEnclosure : IEnclosure
     public bool Contains(Vector3 point)
     {
         Vector3 r = point - corner;
-        double u = Vector3.Dot(r, axis);
-        double v = Vector3.Dot(r, across);
-        Footprint fp = Glasshouse.Footprint;
-        if (u < -InsideToleranceM || u > fp.LengthM + InsideToleranceM || v < -InsideToleranceM
-            || v > fp.WidthM + InsideToleranceM || point.Z < -InsideToleranceM)
-        {
-            return false;
-        }
-
-        return point.Z <= RoofHeight(v) + InsideToleranceM;
+        return ContainsLocal(Vector3.Dot(r, axis), Vector3.Dot(r, across), point.Z);
     }
+
+    private bool ContainsLocal(double u, double v, double z) =>
+        u >= -InsideToleranceM && u <= length + InsideToleranceM && v >= -InsideToleranceM && v <= width + InsideToleranceM
+        && z >= -InsideToleranceM && z <= RoofHeight(v) + InsideToleranceM;
 
     /// <summary>
     /// Product of the cover transmittances of every envelope crossing of the ray from an inside point, found in the
@@ -214,22 +218,14 @@ public sealed class GlasshouseEnclosure : IEnclosure
     /// adjacent and merged. Equivalent to <see cref="EnvelopeTransmittanceByFacets"/> (checked by a property test) but
     /// costs O(bays crossed) instead of O(facets).
     /// </remarks>
-    private double EnvelopeTransmittance(Vector3 origin, Vector3 d)
+    private double EnvelopeTransmittance(Vector3 origin, Vector3 d, double u0, double v0)
     {
-        Glasshouse g = Glasshouse;
-        Vector3 r = origin - corner;
-        double u0 = Vector3.Dot(r, axis);
-        double v0 = Vector3.Dot(r, across);
         double z0 = origin.Z;
         double du = Vector3.Dot(d, axis);
         double dv = Vector3.Dot(d, across);
         du = Math.Abs(du) < ParallelCosine ? 0 : du; // a ray along a wall plane does not cross it (as in FacetGeometry)
         dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
         double dz = d.Z;
-        double length = g.Footprint.LengthM;
-        double width = g.Footprint.WidthM;
-        double bay = g.BayWidthM;
-        double gutter = g.GutterHeightM;
 
         // Where the ray leaves the footprint's vertical prism; nothing of the envelope lies beyond.
         double tAlong = du > 0 ? (length - u0) / du : du < 0 ? -u0 / du : double.PositiveInfinity;
@@ -239,7 +235,7 @@ public sealed class GlasshouseEnclosure : IEnclosure
         var crossings = new CrossingProduct();
 
         // Roof: visit the bays from the origin's bay toward the exit, planes in the order the ray meets them.
-        int lastBay = g.BayCount - 1;
+        int lastBay = bayCount - 1;
         int first = EntryBay(v0, dv);
         double vEnd = double.IsPositiveInfinity(tEnd) ? v0 : v0 + (tEnd * dv);
         int step = dv >= 0 ? 1 : -1;
@@ -370,7 +366,6 @@ public sealed class GlasshouseEnclosure : IEnclosure
     // internal gutter line may instead run into the neighbouring bay without crossing anything).
     private bool LeavesAtStart(Vector3 origin, Vector3 d)
     {
-        Footprint fp = Glasshouse.Footprint;
         Vector3 r = origin - corner;
         double u0 = Vector3.Dot(r, axis);
         double v0 = Vector3.Dot(r, across);
@@ -379,12 +374,12 @@ public sealed class GlasshouseEnclosure : IEnclosure
         du = Math.Abs(du) < ParallelCosine ? 0 : du;
         dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
         const double tol = InsideToleranceM;
-        if ((u0 <= tol && du < 0) || (u0 >= fp.LengthM - tol && du > 0) || (v0 <= tol && dv < 0) || (v0 >= fp.WidthM - tol && dv > 0))
+        if ((u0 <= tol && du < 0) || (u0 >= length - tol && du > 0) || (v0 <= tol && dv < 0) || (v0 >= width - tol && dv > 0))
         {
             return true;
         }
 
-        if (origin.Z < RoofHeight(Math.Clamp(v0, 0, fp.WidthM)) - tol)
+        if (origin.Z < RoofHeight(Math.Clamp(v0, 0, width)) - tol)
         {
             return false;
         }
@@ -394,7 +389,6 @@ public sealed class GlasshouseEnclosure : IEnclosure
             return d.Z > 0;
         }
 
-        double bay = Glasshouse.BayWidthM;
         int i = EntryBay(v0, dv);
         double w = v0 - (i * bay);
         bool towardRidge = dv > 0 ? w < (bay / 2) - tol : w > (bay / 2) + tol;
@@ -405,18 +399,16 @@ public sealed class GlasshouseEnclosure : IEnclosure
     // The bay a ray at distance v across the bays moves over next: on a bay boundary, the bay on the side it moves to.
     private int EntryBay(double v, double dv)
     {
-        double bay = Glasshouse.BayWidthM;
         double position = dv >= 0 ? Math.Floor((v + InsideToleranceM) / bay) : Math.Ceiling((v - InsideToleranceM) / bay) - 1;
-        return (int)Math.Clamp(position, 0, Glasshouse.BayCount - 1);
+        return (int)Math.Clamp(position, 0, bayCount - 1);
     }
 
     // Height of the roof profile at a distance v across the bays (v within the footprint).
     private double RoofHeight(double v)
     {
-        double bay = Glasshouse.BayWidthM;
-        double withinBay = v - (Math.Clamp(Math.Floor(v / bay), 0, Glasshouse.BayCount - 1) * bay);
+        double withinBay = v - (Math.Clamp(Math.Floor(v / bay), 0, bayCount - 1) * bay);
         double fromGutter = Math.Max(0, Math.Min(withinBay, bay - withinBay));
-        return Glasshouse.GutterHeightM + (fromGutter * roofRise);
+        return gutter + (fromGutter * roofRise);
     }
 
     private Vector3 Position(double along, double acrossM, double height) =>
