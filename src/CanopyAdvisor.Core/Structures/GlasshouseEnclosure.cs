@@ -33,8 +33,14 @@ namespace CanopyAdvisor.Core.Structures;
 /// outward through it.
 /// </para>
 /// <para>
-/// Performance: allocation-free; one plane test per facet (4·bays + 4 facets for pitched roofs) and one slab test per
-/// obstruction. Immutable and thread-safe. Build with <see cref="EnclosureBuilder"/>.
+/// Edges: where a ray passes exactly through a ridge, gutter, eave or corner, the coincident hits count as one
+/// crossing, through the facet crossed most squarely. A ray running exactly along a wall plane does not cross it.
+/// </para>
+/// <para>
+/// Performance: allocation-free. The ray is followed in the house's own frame across the saw-tooth roof profile,
+/// visiting only the bays it passes over below ridge height (one or two for steep rays), plus one test for the
+/// bounding walls and one slab test per obstruction; IsBlocked tests the opaque facets only. Immutable and
+/// thread-safe. Build with <see cref="EnclosureBuilder"/>.
 /// </para>
 /// </remarks>
 public sealed class GlasshouseEnclosure : IEnclosure
@@ -63,6 +69,7 @@ public sealed class GlasshouseEnclosure : IEnclosure
     private readonly double bay;
     private readonly double gutter;
     private readonly int bayCount;
+    private readonly double ridge;
     private readonly double sinSlope;
     private readonly double cosSlope;
     private readonly GlazingOptics roofOptics;
@@ -86,6 +93,7 @@ public sealed class GlasshouseEnclosure : IEnclosure
         bay = glasshouse.BayWidthM;
         gutter = glasshouse.GutterHeightM;
         bayCount = glasshouse.BayCount;
+        ridge = glasshouse.RidgeHeightM;
         sinSlope = glasshouse.RoofSlope.Sin();
         cosSlope = glasshouse.RoofSlope.Cos();
         roofOptics = new GlazingOptics(glasshouse.Roof);
@@ -151,13 +159,15 @@ public sealed class GlasshouseEnclosure : IEnclosure
     /// <returns>A fraction in [0, 1].</returns>
     public double SkyTransmittance(Vector3 origin, Vector3 towardSky)
     {
-        double length = towardSky.Length;
-        if (!(towardSky.Z > HorizonCosine * length))
+        double squared = towardSky.LengthSquared;
+        if (!(towardSky.Z > 0 && towardSky.Z * towardSky.Z > HorizonCosine * HorizonCosine * squared))
         {
             return 0;
         }
 
-        Vector3 d = towardSky / length;
+        // Quadrature and sun directions are unit vectors already; normalise only when needed (saves a square root
+        // and three divisions on the hot path).
+        Vector3 d = Math.Abs(squared - 1) < 1e-12 ? towardSky : towardSky / Math.Sqrt(squared);
         if (obstructions.Count > 0 && obstructions.Blocks(origin, d, double.PositiveInfinity))
         {
             return 0;
@@ -234,10 +244,13 @@ public sealed class GlasshouseEnclosure : IEnclosure
 
         var crossings = new CrossingProduct();
 
-        // Roof: visit the bays from the origin's bay toward the exit, planes in the order the ray meets them.
+        // Roof: visit the bays from the origin's bay toward the exit, planes in the order the ray meets them. Once
+        // the ray is above the ridges it cannot meet the roof again, so the walk stops there (steep rays visit one
+        // or two bays).
         int lastBay = bayCount - 1;
         int first = EntryBay(v0, dv);
-        double vEnd = double.IsPositiveInfinity(tEnd) ? v0 : v0 + (tEnd * dv);
+        double tRoof = Math.Min(tEnd, ((ridge - z0) / dz) + CoincidenceM);
+        double vEnd = double.IsPositiveInfinity(tRoof) ? v0 : v0 + (tRoof * dv);
         int step = dv >= 0 ? 1 : -1;
         int last = Math.Clamp((int)Math.Floor(vEnd / bay), 0, lastBay);
         last = step > 0 ? Math.Max(last, first) : Math.Min(last, first); // rounding must not send the walk backward
@@ -275,7 +288,7 @@ public sealed class GlasshouseEnclosure : IEnclosure
                     cosine = rightCosine;
                 }
 
-                if (!(t >= -CoincidenceM && t <= tEnd + CoincidenceM))
+                if (!(t >= -CoincidenceM && t <= tRoof + CoincidenceM))
                 {
                     continue;
                 }
