@@ -21,15 +21,19 @@ namespace CanopyAdvisor.Core.Light;
 /// clockwise from north). A constant weight is therefore integrated exactly at any resolution (open hemisphere:
 /// f = 1, v = ẑ, s = 2 to rounding), and the z part of the vector weight equals the cosine weight bit for bit, so
 /// v.Z = f exactly. The error for a weight with sharp edges (window frames, obstruction outlines) comes from
-/// the cells the edge cuts; it falls roughly as Δ. Measured against Howell's configuration factors B-3 and B-4 (see
-/// the tests): at 16 bands (the default, 648 cells) the view factor of a window is within about 2 % (absolute error
-/// below 0.003); at 300 bands within 0.1 %.
+/// the cells the edge cuts and falls roughly as Δ. Measured view-factor errors for Howell's B-3 and B-4 windows
+/// (cases (1,1,1) and (2,1,0.5), edges partly aligned with cell boundaries, the worst case):
+/// 16 bands (the default, 651 directions): up to 2.1 % (B-3) and 5.5 % (B-4), absolute ≤ 0.005;
+/// 20 bands (1 019): up to 1.6 % / 4.1 %; 32 bands (2 608): up to 1 %; 300 bands (229 189): up to 0.12 %.
+/// A smooth weight converges faster (w = cos θ: error below 0.5 % at 16 bands). The default balances this
+/// against cost: one weight evaluation per direction, so 6 400 sample points cost 4.2 million enclosure
+/// queries at the default resolution.
 /// </para>
 /// <para>Immutable and thread-safe; build once and share.</para>
 /// </remarks>
 public sealed class HemisphereQuadrature
 {
-    /// <summary>Zenith bands of <see cref="Default"/>: 16 (648 directions, cells about 5.6° across).</summary>
+    /// <summary>Zenith bands of <see cref="Default"/>: 16 (651 directions, cells about 5.6° across).</summary>
     public const int DefaultZenithBands = 16;
 
     /// <summary>Largest accepted number of zenith bands (about 10 million cells).</summary>

@@ -15,6 +15,9 @@ namespace CanopyAdvisor.Core.Structures;
 /// </remarks>
 internal readonly struct FacetGeometry
 {
+    /// <summary>Below this |n·d| a ray counts as running along the facet's plane.</summary>
+    public const double ParallelCosine = 1e-14;
+
     private const double EdgeTolerance = 1e-9;
 
     public FacetGeometry(Vector3 p0, Vector3 e1, Vector3 e2, bool triangle, Vector3 outward, GlazingOptics optics)
@@ -58,7 +61,7 @@ internal readonly struct FacetGeometry
     public double Intersect(in Vector3 origin, in Vector3 direction)
     {
         double denominator = Vector3.Dot(Normal, direction);
-        if (Math.Abs(denominator) < 1e-14)
+        if (Math.Abs(denominator) < ParallelCosine)
         {
             return double.NaN;
         }

@@ -33,8 +33,14 @@ namespace CanopyAdvisor.Core.Structures;
 /// outward through it.
 /// </para>
 /// <para>
-/// Performance: allocation-free; one plane test per facet (4·bays + 4 facets for pitched roofs) and one slab test per
-/// obstruction. Immutable and thread-safe. Build with <see cref="EnclosureBuilder"/>.
+/// Edges: where a ray passes exactly through a ridge, gutter, eave or corner, the coincident hits count as one
+/// crossing, through the facet crossed most squarely. A ray running exactly along a wall plane does not cross it.
+/// </para>
+/// <para>
+/// Performance: allocation-free. The ray is followed in the house's own frame across the saw-tooth roof profile,
+/// visiting only the bays it passes over below ridge height (one or two for steep rays), plus one test for the
+/// bounding walls and one slab test per obstruction; IsBlocked tests the opaque facets only. Immutable and
+/// thread-safe. Build with <see cref="EnclosureBuilder"/>.
 /// </para>
 /// </remarks>
 public sealed class GlasshouseEnclosure : IEnclosure
@@ -43,6 +49,9 @@ public sealed class GlasshouseEnclosure : IEnclosure
     // facets at the same point.
     private const double CoincidenceM = 1e-9;
     private const double InsideToleranceM = 1e-9;
+
+    // A ray whose direction cosine with a plane's normal is below this runs along the plane (same as FacetGeometry).
+    private const double ParallelCosine = FacetGeometry.ParallelCosine;
 
     // Directions whose vertical component is within rounding of zero (cos(90°) = 6e-17) count as the horizon.
     private const double HorizonCosine = 1e-12;
@@ -55,6 +64,19 @@ public sealed class GlasshouseEnclosure : IEnclosure
     private readonly Vector3 axis;
     private readonly Vector3 across;
     private readonly double roofRise;
+    private readonly double length;
+    private readonly double width;
+    private readonly double bay;
+    private readonly double gutter;
+    private readonly int bayCount;
+    private readonly double ridge;
+    private readonly double sinSlope;
+    private readonly double cosSlope;
+    private readonly GlazingOptics roofOptics;
+    private readonly GlazingOptics leftOptics;
+    private readonly GlazingOptics rightOptics;
+    private readonly GlazingOptics frontOptics;
+    private readonly GlazingOptics backOptics;
 
     internal GlasshouseEnclosure(Glasshouse glasshouse, ObstructionBoxes obstructions)
     {
@@ -66,12 +88,21 @@ public sealed class GlasshouseEnclosure : IEnclosure
         axis = fp.AxisDirection;
         across = fp.WidthDirection;
         roofRise = glasshouse.RoofSlope.Tan();
+        length = fp.LengthM;
+        width = fp.WidthM;
+        bay = glasshouse.BayWidthM;
+        gutter = glasshouse.GutterHeightM;
+        bayCount = glasshouse.BayCount;
+        ridge = glasshouse.RidgeHeightM;
+        sinSlope = glasshouse.RoofSlope.Sin();
+        cosSlope = glasshouse.RoofSlope.Cos();
+        roofOptics = new GlazingOptics(glasshouse.Roof);
+        leftOptics = new GlazingOptics(glasshouse.LeftWall);
+        rightOptics = new GlazingOptics(glasshouse.RightWall);
+        frontOptics = new GlazingOptics(glasshouse.FrontWall);
+        backOptics = new GlazingOptics(glasshouse.BackWall);
 
         var facetList = new List<(EnvelopeFacet Facet, FacetGeometry Geometry)>();
-        double length = fp.LengthM;
-        double width = fp.WidthM;
-        double bay = glasshouse.BayWidthM;
-        double gutter = glasshouse.GutterHeightM;
         double rise = glasshouse.RidgeHeightM - gutter;
         Vector3 up = Vector3.UnitZ;
 
@@ -128,56 +159,24 @@ public sealed class GlasshouseEnclosure : IEnclosure
     /// <returns>A fraction in [0, 1].</returns>
     public double SkyTransmittance(Vector3 origin, Vector3 towardSky)
     {
-        double length = towardSky.Length;
-        if (!(towardSky.Z > HorizonCosine * length))
+        double squared = towardSky.LengthSquared;
+        if (!(towardSky.Z > 0 && towardSky.Z * towardSky.Z > HorizonCosine * HorizonCosine * squared))
         {
             return 0;
         }
 
-        Vector3 d = towardSky / length;
+        // Quadrature and sun directions are unit vectors already; normalise only when needed (saves a square root
+        // and three divisions on the hot path).
+        Vector3 d = Math.Abs(squared - 1) < 1e-12 ? towardSky : towardSky / Math.Sqrt(squared);
         if (obstructions.Count > 0 && obstructions.Blocks(origin, d, double.PositiveInfinity))
         {
             return 0;
         }
 
-        if (!Contains(origin))
-        {
-            return 1;
-        }
-
-        // Small stack buffer of the crossing distances found so far, to merge hits on shared edges.
-        Span<double> crossings = facets.Length <= 512 ? stackalloc double[facets.Length] : new double[facets.Length];
-        int crossingCount = 0;
-        double transmittance = unshadedFraction;
-        foreach (ref readonly FacetGeometry facet in facets.AsSpan())
-        {
-            double t = facet.Intersect(origin, d);
-            if (!(t >= -CoincidenceM))
-            {
-                continue; // no hit (NaN) or behind the origin
-            }
-
-            double cosine = Vector3.Dot(d, facet.Normal);
-            if (t <= CoincidenceM && cosine <= 0)
-            {
-                continue; // the origin lies on this facet and the ray goes inward
-            }
-
-            if (IsRepeat(crossings[..crossingCount], t))
-            {
-                continue;
-            }
-
-            crossings[crossingCount++] = t;
-            if (facet.Optics.Opaque)
-            {
-                return 0;
-            }
-
-            transmittance *= facet.Optics.TransmittanceAtCosine(cosine);
-        }
-
-        return transmittance;
+        Vector3 r = origin - corner;
+        double u0 = Vector3.Dot(r, axis);
+        double v0 = Vector3.Dot(r, across);
+        return ContainsLocal(u0, v0, origin.Z) ? unshadedFraction * EnvelopeTransmittance(origin, d, u0, v0) : 1;
     }
 
     /// <summary>Whether an opaque envelope facet or an obstruction lies on the segment between two points (ends excluded).</summary>
@@ -212,32 +211,217 @@ public sealed class GlasshouseEnclosure : IEnclosure
     public bool Contains(Vector3 point)
     {
         Vector3 r = point - corner;
-        double u = Vector3.Dot(r, axis);
-        double v = Vector3.Dot(r, across);
-        Footprint fp = Glasshouse.Footprint;
-        if (u < -InsideToleranceM || u > fp.LengthM + InsideToleranceM || v < -InsideToleranceM
-            || v > fp.WidthM + InsideToleranceM || point.Z < -InsideToleranceM)
+        return ContainsLocal(Vector3.Dot(r, axis), Vector3.Dot(r, across), point.Z);
+    }
+
+    private bool ContainsLocal(double u, double v, double z) =>
+        u >= -InsideToleranceM && u <= length + InsideToleranceM && v >= -InsideToleranceM && v <= width + InsideToleranceM
+        && z >= -InsideToleranceM && z <= RoofHeight(v) + InsideToleranceM;
+
+    /// <summary>
+    /// Product of the cover transmittances of every envelope crossing of the ray from an inside point, found in the
+    /// glasshouse's own frame (u along the ridge, v across the bays, z up): the roof profile is a saw-tooth in (v, z),
+    /// so only the bays the ray passes over are visited, and the end and side walls are planes of the bounding prism.
+    /// </summary>
+    /// <remarks>
+    /// Crossings are visited in order along the ray, so hits on a shared edge (ridge, internal gutter, eave) are
+    /// adjacent and merged. Equivalent to <see cref="EnvelopeTransmittanceByFacets"/> (checked by a property test) but
+    /// costs O(bays crossed) instead of O(facets).
+    /// </remarks>
+    private double EnvelopeTransmittance(Vector3 origin, Vector3 d, double u0, double v0)
+    {
+        double z0 = origin.Z;
+        double du = Vector3.Dot(d, axis);
+        double dv = Vector3.Dot(d, across);
+        du = Math.Abs(du) < ParallelCosine ? 0 : du; // a ray along a wall plane does not cross it (as in FacetGeometry)
+        dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
+        double dz = d.Z;
+
+        // Where the ray leaves the footprint's vertical prism; nothing of the envelope lies beyond.
+        double tAlong = du > 0 ? (length - u0) / du : du < 0 ? -u0 / du : double.PositiveInfinity;
+        double tAcross = dv > 0 ? (width - v0) / dv : dv < 0 ? -v0 / dv : double.PositiveInfinity;
+        double tEnd = Math.Min(tAlong, tAcross);
+
+        var crossings = new CrossingProduct();
+
+        // Roof: visit the bays from the origin's bay toward the exit, planes in the order the ray meets them. Once
+        // the ray is above the ridges it cannot meet the roof again, so the walk stops there (steep rays visit one
+        // or two bays).
+        int lastBay = bayCount - 1;
+        int first = EntryBay(v0, dv);
+        double tRoof = Math.Min(tEnd, ((ridge - z0) / dz) + CoincidenceM);
+        double vEnd = double.IsPositiveInfinity(tRoof) ? v0 : v0 + (tRoof * dv);
+        int step = dv >= 0 ? 1 : -1;
+        int last = Math.Clamp((int)Math.Floor(vEnd / bay), 0, lastBay);
+        last = step > 0 ? Math.Max(last, first) : Math.Min(last, first); // rounding must not send the walk backward
+        double leftDenominator = dz - (roofRise * dv);
+        double rightDenominator = dz + (roofRise * dv);
+        double leftCosine = (dz * cosSlope) - (dv * sinSlope);
+        double rightCosine = (dz * cosSlope) + (dv * sinSlope);
+        for (int i = first; ; i += step)
+        {
+            double bayStart = i * bay;
+            for (int side = 0; side < 2; side++)
+            {
+                // dv ≥ 0 meets the left (rising) plane first; dv < 0 the right (falling) plane first.
+                bool left = (side == 0) == (dv >= 0);
+                double t;
+                double cosine;
+                if (left)
+                {
+                    if (Math.Abs(leftDenominator) < 1e-14)
+                    {
+                        continue;
+                    }
+
+                    t = (gutter + (roofRise * (v0 - bayStart)) - z0) / leftDenominator;
+                    cosine = leftCosine;
+                }
+                else
+                {
+                    if (Math.Abs(rightDenominator) < 1e-14)
+                    {
+                        continue;
+                    }
+
+                    t = (gutter + (roofRise * (bayStart + bay - v0)) - z0) / rightDenominator;
+                    cosine = rightCosine;
+                }
+
+                if (!(t >= -CoincidenceM && t <= tRoof + CoincidenceM))
+                {
+                    continue;
+                }
+
+                double v = v0 + (t * dv);
+                double low = left ? bayStart : bayStart + (bay / 2);
+                if (v < low - InsideToleranceM || v > low + (bay / 2) + InsideToleranceM)
+                {
+                    continue;
+                }
+
+                if (t <= CoincidenceM && (cosine <= 0 || !LeavesAtStart(origin, d)))
+                {
+                    continue; // the origin is on this plane and the ray does not leave the envelope through it
+                }
+
+                crossings.Add(t, cosine, roofOptics, CoincidenceM);
+                if (crossings.Blocked)
+                {
+                    return 0;
+                }
+            }
+
+            if (i == last)
+            {
+                break;
+            }
+        }
+
+        // Walls: the ray leaves the prism at tEnd through a wall or gable if it is not above the roof profile there.
+        if (!double.IsPositiveInfinity(tEnd) && (tEnd > CoincidenceM || LeavesAtStart(origin, d)))
+        {
+            double zEnd = z0 + (tEnd * dz);
+            if (zEnd <= RoofHeight(Math.Clamp(v0 + (tEnd * dv), 0, width)) + InsideToleranceM)
+            {
+                // At a corner both walls are offered; the crossing keeps the squarer one.
+                if (tAlong <= tAcross + CoincidenceM)
+                {
+                    crossings.Add(tEnd, du, du > 0 ? backOptics : frontOptics, CoincidenceM);
+                }
+
+                if (tAcross <= tAlong + CoincidenceM && zEnd <= gutter + InsideToleranceM)
+                {
+                    crossings.Add(tEnd, dv, dv > 0 ? rightOptics : leftOptics, CoincidenceM);
+                }
+            }
+        }
+
+        return crossings.Result();
+    }
+
+    /// <summary>
+    /// Reference implementation of <see cref="EnvelopeTransmittance"/>: tests every facet and merges coincident hits.
+    /// Kept for the equivalence test; O(facets) per call.
+    /// </summary>
+    internal double EnvelopeTransmittanceByFacets(Vector3 origin, Vector3 d)
+    {
+        var hits = new List<(double T, double Cosine, int Facet)>();
+        for (int i = 0; i < facets.Length; i++)
+        {
+            double t = facets[i].Intersect(origin, d);
+            if (!(t >= -CoincidenceM))
+            {
+                continue; // no hit (NaN) or behind the origin
+            }
+
+            double cosine = Vector3.Dot(d, facets[i].Normal);
+            if (t <= CoincidenceM && (cosine <= 0 || !LeavesAtStart(origin, d)))
+            {
+                continue; // the origin lies on this facet and the ray does not leave the envelope through it
+            }
+
+            hits.Add((t, cosine, i));
+        }
+
+        var crossings = new CrossingProduct();
+        foreach ((double t, double cosine, int facet) in hits.OrderBy(h => h.T))
+        {
+            crossings.Add(t, cosine, facets[facet].Optics, CoincidenceM);
+        }
+
+        return crossings.Result();
+    }
+
+    // Whether a ray from a point on the envelope goes straight outside. Decided from the geometry, not by stepping
+    // along the ray, so that grazing rays are classified correctly: off an end or side wall if it moves outward
+    // across that wall's plane; off the roof if it climbs faster than the roof profile beneath it (a ray from an
+    // internal gutter line may instead run into the neighbouring bay without crossing anything).
+    private bool LeavesAtStart(Vector3 origin, Vector3 d)
+    {
+        Vector3 r = origin - corner;
+        double u0 = Vector3.Dot(r, axis);
+        double v0 = Vector3.Dot(r, across);
+        double du = Vector3.Dot(d, axis);
+        double dv = Vector3.Dot(d, across);
+        du = Math.Abs(du) < ParallelCosine ? 0 : du;
+        dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
+        const double tol = InsideToleranceM;
+        if ((u0 <= tol && du < 0) || (u0 >= length - tol && du > 0) || (v0 <= tol && dv < 0) || (v0 >= width - tol && dv > 0))
+        {
+            return true;
+        }
+
+        if (origin.Z < RoofHeight(Math.Clamp(v0, 0, width)) - tol)
         {
             return false;
         }
 
-        double bay = Glasshouse.BayWidthM;
-        double withinBay = v - (Math.Clamp(Math.Floor(v / bay), 0, Glasshouse.BayCount - 1) * bay);
-        double fromGutter = Math.Max(0, Math.Min(withinBay, bay - withinBay));
-        return point.Z <= Glasshouse.GutterHeightM + (fromGutter * roofRise) + InsideToleranceM;
-    }
-
-    private static bool IsRepeat(ReadOnlySpan<double> seen, double t)
-    {
-        foreach (double s in seen)
+        if (dv == 0)
         {
-            if (Math.Abs(s - t) <= CoincidenceM)
-            {
-                return true;
-            }
+            return d.Z > 0;
         }
 
-        return false;
+        int i = EntryBay(v0, dv);
+        double w = v0 - (i * bay);
+        bool towardRidge = dv > 0 ? w < (bay / 2) - tol : w > (bay / 2) + tol;
+        double roofClimb = (towardRidge ? roofRise : -roofRise) * Math.Abs(dv);
+        return d.Z > roofClimb;
+    }
+
+    // The bay a ray at distance v across the bays moves over next: on a bay boundary, the bay on the side it moves to.
+    private int EntryBay(double v, double dv)
+    {
+        double position = dv >= 0 ? Math.Floor((v + InsideToleranceM) / bay) : Math.Ceiling((v - InsideToleranceM) / bay) - 1;
+        return (int)Math.Clamp(position, 0, bayCount - 1);
+    }
+
+    // Height of the roof profile at a distance v across the bays (v within the footprint).
+    private double RoofHeight(double v)
+    {
+        double withinBay = v - (Math.Clamp(Math.Floor(v / bay), 0, bayCount - 1) * bay);
+        double fromGutter = Math.Max(0, Math.Min(withinBay, bay - withinBay));
+        return gutter + (fromGutter * roofRise);
     }
 
     private Vector3 Position(double along, double acrossM, double height) =>

@@ -12,6 +12,8 @@ namespace CanopyAdvisor.Core.Structures;
 /// </remarks>
 internal sealed class ObstructionBoxes
 {
+    private const double GrazingM = 1e-12;
+
     private readonly Box[] boxes;
 
     public ObstructionBoxes(ImmutableArray<Obstruction> obstructions)
@@ -31,13 +33,20 @@ internal sealed class ObstructionBoxes
 
     /// <summary>
     /// Whether any box overlaps the part of the ray <c>origin + t·direction</c> with 0 &lt; t &lt; <paramref name="tMax"/>
-    /// by more than a grazing touch. A ray that starts inside a box is blocked.
+    /// by more than a grazing touch (10⁻¹² m). A ray that starts inside a box is blocked.
     /// </summary>
     public bool Blocks(in Vector3 origin, in Vector3 direction, double tMax)
     {
+        if (boxes.Length == 0)
+        {
+            return false;
+        }
+
+        // A touch shorter than this (metres along the ray) is grazing, not blocking.
+        double minimumOverlap = GrazingM / direction.Length;
         foreach (ref readonly Box box in boxes.AsSpan())
         {
-            if (box.Overlaps(origin, direction, tMax))
+            if (box.Overlaps(origin, direction, tMax, minimumOverlap))
             {
                 return true;
             }
@@ -48,7 +57,7 @@ internal sealed class ObstructionBoxes
 
     private readonly struct Box(Vector3 corner, Vector3 axis, Vector3 across, double length, double width, double height)
     {
-        public bool Overlaps(in Vector3 origin, in Vector3 direction, double tMax)
+        public bool Overlaps(in Vector3 origin, in Vector3 direction, double tMax, double minimumOverlap)
         {
             Vector3 d = origin - corner;
             double low = 0;
@@ -56,7 +65,7 @@ internal sealed class ObstructionBoxes
             return Clip(Vector3.Dot(d, axis), Vector3.Dot(direction, axis), length, ref low, ref high)
                 && Clip(Vector3.Dot(d, across), Vector3.Dot(direction, across), width, ref low, ref high)
                 && Clip(d.Z, direction.Z, height, ref low, ref high)
-                && high - low > 1e-12;
+                && high - low > minimumOverlap;
         }
 
         private static bool Clip(double start, double step, double extent, ref double low, ref double high)

@@ -45,6 +45,25 @@ public sealed class CoverOpticsTests
         Assert.Equal(expected, CoverOptics.ReflectionTransmittance(Glass(1), Angle.FromDegrees(1e-6)), 10);
     }
 
+    [Theory]
+    [InlineData(1, 1.526)]
+    [InlineData(2, 1.526)]
+    [InlineData(3, 1.49)]
+    public void Cosine_form_equals_Duffie_Beckman_sine_tangent_form(int layers, double n)
+    {
+        // Duffie & Beckman ch. 5 write r⊥ = sin²(θ₂−θ₁)/sin²(θ₂+θ₁), r∥ = tan²(θ₂−θ₁)/tan²(θ₂+θ₁) (θ₁ > 0).
+        var cover = new Cover("glass", false, n, 0, 0, layers);
+        for (double deg = 0.5; deg < 90; deg += 0.5)
+        {
+            double t1 = deg * Math.PI / 180;
+            double t2 = Math.Asin(Math.Sin(t1) / n);
+            double rPerp = Math.Pow(Math.Sin(t2 - t1), 2) / Math.Pow(Math.Sin(t2 + t1), 2);
+            double rPar = Math.Pow(Math.Tan(t2 - t1), 2) / Math.Pow(Math.Tan(t2 + t1), 2);
+            double tau = 0.5 * (((1 - rPar) / (1 + ((2 * layers - 1) * rPar))) + ((1 - rPerp) / (1 + ((2 * layers - 1) * rPerp))));
+            Assert.Equal(tau, CoverOptics.ReflectionTransmittance(cover, Angle.FromDegrees(deg)), 12);
+        }
+    }
+
     [Fact]
     public void Absorption_follows_Bouguer_law_along_the_refracted_path()
     {

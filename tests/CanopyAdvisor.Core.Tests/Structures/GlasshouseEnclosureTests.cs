@@ -72,6 +72,30 @@ public sealed class GlasshouseEnclosureTests
         Assert.Equal(expected, twoBays.SkyTransmittance(new Vector3(6, 10, 4.5), Toward(90, 10)), 12);
     }
 
+    [Theory]
+    // From a point on the internal gutter line of two bays (x = 8 m, z = 4 m), rays west:
+    // at 10° (below the 30° slope) the ray runs into bay 0 and leaves by its west plane at x = 1.87 m,
+    // cos θ = sin(30° + 10°), θ = 50°; at 50° it leaves at once over bay 0's east plane (normal (sin 30°, cos 30°) in
+    // the bay section), cos θ = sin(50° − 30°), θ = 70°; the neighbouring bay's plane through the same line is not crossed.
+    [InlineData(10.0, 50.0)]
+    [InlineData(50.0, 70.0)]
+    public void Ray_from_an_internal_gutter_line(double elevationDeg, double incidenceDeg)
+    {
+        GlasshouseEnclosure twoBays = Enclose(House(bays: 2));
+        Assert.Equal(Tau(Glass, incidenceDeg) * 0.9, twoBays.SkyTransmittance(new Vector3(8, 10, 4), Toward(270, elevationDeg)), 12);
+    }
+
+    [Fact]
+    public void Point_on_a_wall_counts_the_wall_only_when_looking_out()
+    {
+        // On the west wall (x = 0): west at 5.71° up crosses the wall at once (incidence acos(d·n));
+        // east at 45° up crosses only the east roof plane (θ = 15°, as in Steep_ray_leaves_through_the_east_roof_plane).
+        var onWall = new Vector3(0, 10, 1);
+        var west = new Vector3(-1, 0, 0.1).Normalized();
+        Assert.Equal(Tau(Glass, Math.Acos(-west.X) * 180 / Math.PI) * 0.9, single.SkyTransmittance(onWall, west), 12);
+        Assert.Equal(Tau(Glass, 15) * 0.9, single.SkyTransmittance(onWall, Toward(90, 45)), 12);
+    }
+
     [Fact]
     public void Directions_at_or_below_the_horizon_see_no_sky()
     {
