@@ -4,7 +4,9 @@ namespace CanopyAdvisor.Core.Lamps;
 /// <remarks>
 /// Directions are given in the lamp's own frame: <c>polar</c> is the angle from the optical axis (0 on axis, π
 /// straight back), <c>around</c> the angle about the axis from the photometric reference direction (IES C = 0°),
-/// counter-clockwise when looking against the beam (from below for a downward lamp, as IES type C).
+/// counter-clockwise when looking along the beam from behind the lamp (from above for a downward lamp: the usual
+/// reading of IES LM-63 type C horizontal angles, "counter-clockwise seen from above"; from memory, not verified
+/// against the standard's text).
 /// Implementations are normalised so that the integral over the sphere is 1; multiply by the lamp's photon flux
 /// to get µmol s⁻¹ sr⁻¹. Implementations are immutable and safe to share between threads.
 /// </remarks>

@@ -11,8 +11,8 @@ namespace CanopyAdvisor.Core.Lamps;
 /// vertical plane, so before spin it is cos t ĥ + sin t ẑ (straight up for a lamp tilted to horizontal).
 /// </para>
 /// <para>
-/// <see cref="Lateral"/> (C = 90°) is Axis × Reference, so the around angle increases counter-clockwise when looking
-/// against the beam (from below for a downward lamp), as <see cref="BeamDistribution"/> states. Spin s turns the
+/// <see cref="Lateral"/> (C = 90°) is Reference × Axis, so the around angle increases counter-clockwise when looking
+/// along the beam from behind the lamp (from above for a downward lamp), as <see cref="BeamDistribution"/> states. Spin s turns the
 /// reference about the axis toward the lateral direction: Reference = cos s R₀ + sin s L₀. A positive spin therefore
 /// moves the pattern by +s in the around angle: what the unspun lamp sent toward around angle φ now goes toward φ + s.
 /// </para>
@@ -30,12 +30,12 @@ public sealed class LampFrame
         double ct = aim.Tilt.Cos();
         Vector3 axis = (st * horizontal) - (ct * Vector3.UnitZ);
         Vector3 reference0 = (ct * horizontal) + (st * Vector3.UnitZ);
-        Vector3 lateral0 = Vector3.Cross(axis, reference0);
+        Vector3 lateral0 = Vector3.Cross(reference0, axis);
         double ss = aim.Spin.Sin();
         double cs = aim.Spin.Cos();
         Axis = axis.Normalized();
         Reference = ((cs * reference0) + (ss * lateral0)).Normalized();
-        Lateral = Vector3.Cross(Axis, Reference).Normalized();
+        Lateral = Vector3.Cross(Reference, Axis).Normalized();
     }
 
     /// <summary>The frame of an unaimed lamp (pointing down, C = 0° toward north).</summary>

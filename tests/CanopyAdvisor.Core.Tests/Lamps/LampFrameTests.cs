@@ -16,8 +16,9 @@ public class LampFrameTests
         Near(-Vector3.UnitZ, f.Axis);
         Near(Vector3.UnitX, f.Reference);
 
-        // C = 90° is Axis × Reference: for a downward lamp with C0 east that is south (counter-clockwise seen from below).
-        Near(-Vector3.UnitY, f.Lateral);
+        // C = 90° is Reference × Axis: for a downward lamp with C0 east that is north (counter-clockwise seen from above,
+        // the usual reading of LM-63 type C horizontal angles; from memory).
+        Near(Vector3.UnitY, f.Lateral);
     }
 
     [Fact]
