@@ -2,8 +2,6 @@ using System.Collections.Immutable;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Sites;
-using CanopyAdvisor.Core.Sky;
-using CanopyAdvisor.Core.Structures;
 using NodaTime;
 
 namespace CanopyAdvisor.Benchmarks;
@@ -72,80 +70,4 @@ public static class BenchmarkScene
     }
 
     private static Cover Glass { get; } = new("glass", false, 1.526, 4, 0.004, 1);
-}
-
-/// <summary>Stand-in enclosure: a glass roof of transmittance 0.75 over an open sky; nothing blocks a lamp.</summary>
-public sealed class GlassRoofEnclosure : IEnclosure
-{
-    /// <inheritdoc />
-    public double SkyTransmittance(Vector3 origin, Vector3 towardSky) => towardSky.Z > 0 ? 0.75 : 0;
-
-    /// <inheritdoc />
-    public bool IsBlocked(Vector3 from, Vector3 to) => false;
-}
-
-/// <summary>Stand-in Lambertian beam, I = cos θ / π.</summary>
-public sealed class LambertianBeam : BeamDistribution
-{
-    /// <inheritdoc />
-    public override bool IsAxiallySymmetric => true;
-
-    /// <inheritdoc />
-    public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians) =>
-        polarRadians < Math.PI / 2 ? Math.Cos(polarRadians) / Math.PI : 0;
-}
-
-/// <summary>Stand-in tabulated beam: 25 C-planes (0–360° by 15°) × 37 polar angles (0–90° by 2.5°), bilinear.</summary>
-public sealed class TabulatedBeam : BeamDistribution
-{
-    private const int Planes = 25;
-    private const int Polars = 37;
-    private const double PlaneStep = 2 * Math.PI / (Planes - 1);
-    private const double PolarStep = Math.PI / 2 / (Polars - 1);
-    private readonly double[] _table = new double[Planes * Polars];
-
-    /// <summary>Fills the table with an elongated cosine-power beam (wider along C = 0° than across), roughly normalised.</summary>
-    public TabulatedBeam()
-    {
-        for (int c = 0; c < Planes; c++)
-        {
-            double around = c * PlaneStep;
-            double n = 1.5 + Math.Abs(Math.Sin(around));
-            for (int p = 0; p < Polars; p++)
-            {
-                _table[(c * Polars) + p] = (n + 1) / (2 * Math.PI) * Math.Pow(Math.Cos(p * PolarStep), n);
-            }
-        }
-    }
-
-    /// <inheritdoc />
-    public override bool IsAxiallySymmetric => false;
-
-    /// <inheritdoc />
-    public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians)
-    {
-        if (polarRadians >= Math.PI / 2)
-        {
-            return 0;
-        }
-
-        double pc = aroundRadians / PlaneStep;
-        double pp = polarRadians / PolarStep;
-        int c = Math.Min((int)pc, Planes - 2);
-        int p = Math.Min((int)pp, Polars - 2);
-        double fc = pc - c, fp = pp - p;
-        int k = (c * Polars) + p;
-        double low = (_table[k] * (1 - fp)) + (_table[k + 1] * fp);
-        double high = (_table[k + Polars] * (1 - fp)) + (_table[k + Polars + 1] * fp);
-        return (low * (1 - fc)) + (high * fc);
-    }
-}
-
-/// <summary>Stand-in outside light: a fixed mid-morning sun.</summary>
-public sealed class FixedSun : IOutsideLightSource
-{
-    private static readonly Vector3 Sun = Direction.FromAzimuthZenith(Angle.FromDegrees(140), Angle.FromDegrees(55));
-
-    /// <inheritdoc />
-    public OutsideLight At(Instant time) => new(time, Sun, 900, 250, 250 + (900 * Sun.Z));
 }

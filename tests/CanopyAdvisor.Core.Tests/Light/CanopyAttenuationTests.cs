@@ -28,6 +28,21 @@ public class CanopyAttenuationTests
         Assert.Equal(expectedM, CanopyAttenuation.PathLengthM(Bench, Point, u), 9);
     }
 
+    // Bench axes follow the footprint (Footprint doc: width to the right of the axis): with the axis pointing east the
+    // left edge is the north side and the front edge the west end. Horizontal paths equal the edge distances.
+    [Theory]
+    [InlineData(0, 0.3)]    // north: left edge
+    [InlineData(180, 0.7)]  // south: right edge
+    [InlineData(270, 1.5)]  // west: front edge
+    [InlineData(90, 2.5)]   // east: back edge
+    public void Edges_follow_a_rotated_bench(double azimuthDeg, double expectedM)
+    {
+        var bench = new Bench("r", new Footprint(0, 0, Angle.FromDegrees(90), 4, 1), 0.8, new Canopy(0.3, 0.1, 4), 1, 1);
+        var point = new SamplePoint(0, 0, 0, new Vector3(1.5, -0.3, 1.0), 1.5, 2.5, 0.3, 0.7);
+        Vector3 u = Direction.FromAzimuthZenith(Angle.FromDegrees(azimuthDeg), Angle.RightAngle);
+        Assert.Equal(expectedM, CanopyAttenuation.PathLengthM(bench, point, u), 9);
+    }
+
     // Straight down never leaves the layer sideways: infinite path, nothing transmitted through a leafy canopy.
     [Fact]
     public void Straight_down_has_no_way_out()
