@@ -1,5 +1,7 @@
 namespace CanopyAdvisor.Cli;
+
 internal static class Program
 {
-    private static int Main(string[] args) => args.Length >= 0 ? 0 : 1;
+    private static int Main(string[] args) =>
+        CanopyCommandLine.Run(args, Console.Out, Console.Error, interactive: !Console.IsErrorRedirected);
 }

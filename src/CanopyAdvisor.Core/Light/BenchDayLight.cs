@@ -29,6 +29,8 @@ namespace CanopyAdvisor.Core.Light;
 /// <param name="BlueVectorTilt">Tilt of the mean blue vector from the vertical.</param>
 /// <param name="BlueVectorAzimuth">Compass azimuth of the mean blue vector's horizontal part.</param>
 /// <param name="RedToFarRed">Photon-weighted R:FR over points and time (Σ 660 / Σ 730), or null without far-red light.</param>
+/// <param name="Red660Integral">Photons in the 655–665 nm window over the usable time, mean over points, µmol m⁻² (the numerator of R:FR).</param>
+/// <param name="FarRed730Integral">Photons in the 725–735 nm window over the usable time, mean over points, µmol m⁻² (the denominator of R:FR).</param>
 /// <param name="Points">Per-point values, in the order of the bench's sample points.</param>
 public sealed record BenchDayLight(
     int BenchIndex,
@@ -47,4 +49,6 @@ public sealed record BenchDayLight(
     Angle BlueVectorTilt,
     Angle BlueVectorAzimuth,
     double? RedToFarRed,
+    double Red660Integral,
+    double FarRed730Integral,
     ImmutableArray<PointDayLight> Points);

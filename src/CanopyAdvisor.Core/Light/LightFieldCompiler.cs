@@ -93,7 +93,7 @@ public static class LightFieldCompiler
         double[] contributions = new double[n * groupCount * CompiledLightField.Stride];
         double[] skyF = new double[n], skyX = new double[n], skyY = new double[n], skyZ = new double[n], skyS = new double[n];
         bool hasSky = site.Structure is not IndoorRoom;
-        InterimSkyGrid? skyGrid = hasSky ? new InterimSkyGrid(options.SkyZenithRings) : null;
+        HemisphereQuadrature? skyGrid = hasSky ? HemisphereQuadrature.Create(options.SkyZenithBands) : null;
 
         Parallel.For(0, n, p =>
         {
@@ -103,31 +103,18 @@ public static class LightFieldCompiler
             AccumulateLamps(point.Position, canopy, lampData, enclosure, contributions.AsSpan(p * groupCount * CompiledLightField.Stride, groupCount * CompiledLightField.Stride));
             if (skyGrid is not null)
             {
-                Vector3 position = point.Position;
-                var (f, v, s) = ComputeSkyView(
-                    skyGrid, position, omega => enclosure.SkyTransmittance(position, omega) * canopy.Transmission(omega, double.PositiveInfinity));
-                skyF[p] = f;
-                skyX[p] = v.X;
-                skyY[p] = v.Y;
-                skyZ[p] = v.Z;
-                skyS[p] = s;
+                SkyView view = SkyViewIntegrator.Integrate(skyGrid, new PointSkyWeight(enclosure, point.Position, canopy));
+                skyF[p] = view.ViewFactor;
+                skyX[p] = view.SkyVector.X;
+                skyY[p] = view.SkyVector.Y;
+                skyZ[p] = view.SkyVector.Z;
+                skyS[p] = view.ScalarFactor;
             }
         });
 
         return new CompiledLightField(
             site.Zone, benches, points, benchStart, groups.MoveToImmutable(), enclosure, hasSky,
             skyF, skyX, skyY, skyZ, skyS, contributions);
-    }
-
-    /// <summary>
-    /// The sky view of a point for a direction weight: f = (1/π)∫w cos θ dω, v = (1/π)∫w ω̂ dω, s = (1/π)∫w dω over
-    /// the upper hemisphere. Interim: replace the body with the shared <c>SkyViewIntegrator.Integrate</c> once merged.
-    /// </summary>
-    internal static (double ViewFactor, Vector3 SkyVector, double ScalarFactor) ComputeSkyView(
-        InterimSkyGrid grid, Vector3 point, Func<Vector3, double> weight)
-    {
-        _ = point;
-        return grid.Integrate(weight);
     }
 
     /// <summary>Adds every lamp's contribution at one point into that point's group accumulators.</summary>
@@ -197,9 +184,9 @@ public static class LightFieldCompiler
     private static void Validate(Site site, LightFieldOptions options)
     {
         var errors = new List<ValidationError>();
-        if (options.SkyZenithRings is < 1 or > 360)
+        if (options.SkyZenithBands is < 1 or > HemisphereQuadrature.MaximumZenithBands)
         {
-            errors.Add(new ValidationError("options.skyZenithRings", "must be between 1 and 360"));
+            errors.Add(new ValidationError("options.skyZenithBands", $"must be between 1 and {HemisphereQuadrature.MaximumZenithBands}"));
         }
 
         if (site.Zone is null)
@@ -363,7 +350,7 @@ public static class LightFieldCompiler
     {
         public LampData(Lamp lamp, int group)
         {
-            var frame = new LampOrientation(lamp.Aim);
+            var frame = new LampFrame(lamp.Aim);
             Position = lamp.Position;
             X = lamp.Position.X;
             Y = lamp.Position.Y;
@@ -374,9 +361,9 @@ public static class LightFieldCompiler
             RefX = frame.Reference.X;
             RefY = frame.Reference.Y;
             RefZ = frame.Reference.Z;
-            ThirdX = frame.Third.X;
-            ThirdY = frame.Third.Y;
-            ThirdZ = frame.Third.Z;
+            ThirdX = frame.Lateral.X;
+            ThirdY = frame.Lateral.Y;
+            ThirdZ = frame.Lateral.Z;
             Flux = lamp.PpfMicromolesPerSecond * lamp.Dimming;
             Distribution = lamp.Distribution;
             Symmetric = lamp.Distribution.IsAxiallySymmetric;
@@ -416,6 +403,13 @@ public static class LightFieldCompiler
         public bool Symmetric { get; }
 
         public int Group { get; }
+    }
+
+    /// <summary>The sky weight of one point: transmittance of the envelope times the canopy's, per direction.</summary>
+    private readonly struct PointSkyWeight(IEnclosure enclosure, Vector3 position, PointCanopy canopy) : ISkyViewWeight
+    {
+        public double Weight(Vector3 towardSky) =>
+            enclosure.SkyTransmittance(position, towardSky) * canopy.Transmission(towardSky, double.PositiveInfinity);
     }
 
     /// <summary>One point's canopy geometry, for the transmission of many directions.</summary>

@@ -1,12 +1,12 @@
 namespace CanopyAdvisor.Core.Light;
 
 /// <summary>Settings of the light-field compile step.</summary>
-/// <param name="SkyZenithRings">
-/// Number of zenith-angle rings of the hemisphere grid used to integrate the sky view of each point (each ring
-/// has four times as many azimuth cells). 9 rings (10° by 10° cells, 324 directions) by default; more rings resolve
-/// walls and ridges better at a cost proportional to rings² (at most 360).
+/// <param name="SkyZenithBands">
+/// Zenith bands of the <see cref="HemisphereQuadrature"/> used to integrate the sky view of each point
+/// (<see cref="HemisphereQuadrature.DefaultZenithBands"/> by default; its doc comment gives the accuracy). More bands
+/// resolve walls and ridges better at a cost proportional to bands².
 /// </param>
-public sealed record LightFieldOptions(int SkyZenithRings = 9)
+public sealed record LightFieldOptions(int SkyZenithBands = HemisphereQuadrature.DefaultZenithBands)
 {
     /// <summary>The default settings.</summary>
     public static LightFieldOptions Default { get; } = new();

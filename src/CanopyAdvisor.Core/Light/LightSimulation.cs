@@ -207,6 +207,8 @@ public static class LightSimulation
             Direction.Zenith(meanBlueVector),
             Direction.Azimuth(meanBlueVector),
             farRed > 0 ? red / farRed : null,
+            count > 0 ? red / count : 0,
+            count > 0 ? farRed / count : 0,
             points.MoveToImmutable());
     }
 }

@@ -1,3 +1,4 @@
+using CanopyAdvisor.Files.Photometry;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 
@@ -27,5 +28,5 @@ public interface IBeamFactory
     /// <param name="micromolesPerLumen">Photon flux per lumen of the lamp's spectrum, µmol s⁻¹ lm⁻¹; given exactly when <paramref name="unit"/> is lumen.</param>
     /// <exception cref="CanopyAdvisor.Core.Validation.InvalidInputException">The file is not valid IES LM-63; the errors carry the file's own positions.</exception>
     /// <exception cref="IOException">The file cannot be read.</exception>
-    IesBeam LoadIes(string fullPath, IesIntensityUnit unit, double? micromolesPerLumen);
+    IesBeam LoadIes(string fullPath, IesValueUnits unit, double? micromolesPerLumen);
 }

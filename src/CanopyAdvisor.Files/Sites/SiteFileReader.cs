@@ -1,3 +1,4 @@
+using CanopyAdvisor.Files.Photometry;
 using System.Globalization;
 using System.Text.Json;
 using CanopyAdvisor.Core.Geometry;
@@ -492,10 +493,10 @@ public sealed class SiteFileReader
             string? values = o.Text("values");
             bool lumen = values == "lumen";
             double? perLumen = o.Number("micromolesPerLumen", required: lumen);
-            IesIntensityUnit? unit = values switch
+            IesValueUnits? unit = values switch
             {
-                "photon" => IesIntensityUnit.Photon,
-                "lumen" => IesIntensityUnit.Lumen,
+                "photon" => IesValueUnits.Photon,
+                "lumen" => IesValueUnits.Lumen,
                 _ => null,
             };
             if (values is not null && unit is null)
@@ -509,7 +510,7 @@ public sealed class SiteFileReader
                 return (UnreadBeam.Instance, null);
             }
 
-            if (perLumen is not null && unit == IesIntensityUnit.Photon)
+            if (perLumen is not null && unit == IesValueUnits.Photon)
             {
                 o.Error("micromolesPerLumen", "is used only with \"values\": \"lumen\"");
                 return (UnreadBeam.Instance, null);

@@ -181,7 +181,7 @@ public class LightFieldCompilerTests
         Bench bench = TestSites.Bench("b", 0, 0, 1, 1, 1, 1, surfaceM: 0, canopyM: 0);
         Site site = TestSites.Make(TestSites.Glasshouse, [bench], []);
         var roof = new SquareShadeEnclosure(new Vector3(0.5, 0.5, 0), 1, 1, 1);
-        CompiledLightField field = LightFieldCompiler.Compile(site, roof, new LightFieldOptions(SkyZenithRings: 180));
+        CompiledLightField field = LightFieldCompiler.Compile(site, roof, new LightFieldOptions(SkyZenithBands: 180));
 
         (double f, _, double s) = field.SkyViewAt(0);
         Assert.Equal(1 - 0.138531606, f, 5e-4);

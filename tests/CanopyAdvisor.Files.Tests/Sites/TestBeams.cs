@@ -1,3 +1,4 @@
+using CanopyAdvisor.Files.Photometry;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Validation;
@@ -36,7 +37,7 @@ internal sealed class TestBeams : IBeamFactory
         return new Labelled(FormattableString.Invariant($"cosinePower {beamAngle.Degrees:0.###}"));
     }
 
-    public IesBeam LoadIes(string fullPath, IesIntensityUnit unit, double? micromolesPerLumen)
+    public IesBeam LoadIes(string fullPath, IesValueUnits unit, double? micromolesPerLumen)
     {
         Calls.Add(FormattableString.Invariant($"ies {Path.GetFileName(fullPath)} {unit} {micromolesPerLumen}"));
         if (BadIesFiles.Contains(Path.GetFileName(fullPath)))
