@@ -12,7 +12,7 @@ namespace CanopyAdvisor.Cli;
 /// <summary><c>canopy sun</c>: the sun's position at an instant (NREL SPA) and that day's sunrise, transit and sunset.</summary>
 internal static class SunCommand
 {
-    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mm':'sso<G>");
+    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mm':'sso<+HH:mm>");
 
     public static Command Create(TextWriter output)
     {
@@ -55,7 +55,7 @@ internal static class SunCommand
             location.Latitude.Degrees,
             location.Longitude.Degrees,
             location.ElevationM,
-            Printed.Format(instant.InZone(zone).ToOffsetDateTime()),
+            Format(instant, zone),
             Round(position.Zenith.Degrees),
             Round(position.Azimuth.Degrees),
             Round(position.Elevation.Degrees),
@@ -65,9 +65,9 @@ internal static class SunCommand
                 SunDayKind.PolarNight => "polar night: the sun does not rise",
                 _ => "the sun rises and sets",
             },
-            times.Sunrise is ZonedDateTime rise ? Printed.Format(rise.ToOffsetDateTime()) : null,
-            Printed.Format(times.Transit.ToOffsetDateTime()),
-            times.Sunset is ZonedDateTime set ? Printed.Format(set.ToOffsetDateTime()) : null);
+            times.Sunrise is ZonedDateTime rise ? Format(rise.ToInstant(), zone) : null,
+            Format(times.Transit.ToInstant(), zone),
+            times.Sunset is ZonedDateTime set ? Format(set.ToInstant(), zone) : null);
     }
 
     private static GeoLocation Location(double latDeg, double lonDeg, double elevationM)
@@ -94,6 +94,14 @@ internal static class SunCommand
     }
 
     private static double Round(double value) => Math.Round(value, 6);
+
+    // Printed to the nearest second (not truncated), so a transit at 11:46:04.96 reads 11:46:05 as in the SPA report.
+    private static string Format(Instant instant, DateTimeZone zone)
+    {
+        long ticks = instant.ToUnixTimeTicks();
+        long rounded = (long)Math.Round(ticks / (double)NodaConstants.TicksPerSecond, MidpointRounding.AwayFromZero) * NodaConstants.TicksPerSecond;
+        return Printed.Format(Instant.FromUnixTimeTicks(rounded).InZone(zone).ToOffsetDateTime());
+    }
 
     private static void WriteText(TextWriter output, SunReport r)
     {

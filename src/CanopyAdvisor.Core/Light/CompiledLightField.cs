@@ -36,6 +36,7 @@ public sealed class CompiledLightField
     internal const int Stride = 5;
 
     private readonly IEnclosure _enclosure;
+    private readonly BenchTops _benchTops;
     private readonly bool _hasSky;
     private readonly int[] _benchStart;
     private readonly double[] _x, _y, _z;
@@ -54,6 +55,7 @@ public sealed class CompiledLightField
         int[] benchStart,
         ImmutableArray<LampGroup> groups,
         IEnclosure enclosure,
+        BenchTops benchTops,
         bool hasSky,
         double[] skyF,
         double[] skyX,
@@ -68,6 +70,7 @@ public sealed class CompiledLightField
         Groups = groups;
         _benchStart = benchStart;
         _enclosure = enclosure;
+        _benchTops = benchTops;
         _hasSky = hasSky;
         _skyF = skyF;
         _skyX = skyX;
@@ -214,7 +217,8 @@ public sealed class CompiledLightField
             double h = dhi * _skyF[p], s = dhi * _skyS[p];
             if (beam)
             {
-                double e = dni * _enclosure.SkyTransmittance(new Vector3(_x[p], _y[p], _z[p]), sun);
+                var position = new Vector3(_x[p], _y[p], _z[p]);
+                double e = _benchTops.BlocksRay(position, sun) ? 0 : dni * _enclosure.SkyTransmittance(position, sun);
                 if (e > 0)
                 {
                     e *= CanopyTransmission(p, sun.X, sun.Y, sun.Z, double.PositiveInfinity);

@@ -93,6 +93,7 @@ public static class LightFieldCompiler
         double[] contributions = new double[n * groupCount * CompiledLightField.Stride];
         double[] skyF = new double[n], skyX = new double[n], skyY = new double[n], skyZ = new double[n], skyS = new double[n];
         bool hasSky = site.Structure is not IndoorRoom;
+        var benchTops = new BenchTops(benches);
         HemisphereQuadrature? skyGrid = hasSky ? HemisphereQuadrature.Create(options.SkyZenithBands) : null;
 
         Parallel.For(0, n, p =>
@@ -100,10 +101,10 @@ public static class LightFieldCompiler
             SamplePoint point = points[p];
             Bench bench = benches[point.BenchIndex];
             var canopy = new PointCanopy(bench, point);
-            AccumulateLamps(point.Position, canopy, lampData, enclosure, contributions.AsSpan(p * groupCount * CompiledLightField.Stride, groupCount * CompiledLightField.Stride));
+            AccumulateLamps(point.Position, canopy, lampData, enclosure, benchTops, contributions.AsSpan(p * groupCount * CompiledLightField.Stride, groupCount * CompiledLightField.Stride));
             if (skyGrid is not null)
             {
-                SkyView view = SkyViewIntegrator.Integrate(skyGrid, new PointSkyWeight(enclosure, point.Position, canopy));
+                SkyView view = SkyViewIntegrator.Integrate(skyGrid, new PointSkyWeight(enclosure, benchTops, point.Position, canopy));
                 skyF[p] = view.ViewFactor;
                 skyX[p] = view.SkyVector.X;
                 skyY[p] = view.SkyVector.Y;
@@ -113,12 +114,12 @@ public static class LightFieldCompiler
         });
 
         return new CompiledLightField(
-            site.Zone, benches, points, benchStart, groups.MoveToImmutable(), enclosure, hasSky,
+            site.Zone, benches, points, benchStart, groups.MoveToImmutable(), enclosure, benchTops, hasSky,
             skyF, skyX, skyY, skyZ, skyS, contributions);
     }
 
     /// <summary>Adds every lamp's contribution at one point into that point's group accumulators.</summary>
-    private static void AccumulateLamps(Vector3 point, PointCanopy canopy, LampData[] lamps, IEnclosure enclosure, Span<double> into)
+    private static void AccumulateLamps(Vector3 point, PointCanopy canopy, LampData[] lamps, IEnclosure enclosure, BenchTops benchTops, Span<double> into)
     {
         for (int l = 0; l < lamps.Length; l++)
         {
@@ -163,7 +164,7 @@ public static class LightFieldCompiler
 
             double e = lamp.Flux * intensity / d2;
             e *= canopy.Transmission(ux, uy, uz, d);
-            if (!(e > 0) || enclosure.IsBlocked(point, lamp.Position))
+            if (!(e > 0) || benchTops.BlocksSegment(point, lamp.Position) || enclosure.IsBlocked(point, lamp.Position))
             {
                 continue;
             }
@@ -406,10 +407,12 @@ public static class LightFieldCompiler
     }
 
     /// <summary>The sky weight of one point: transmittance of the envelope times the canopy's, per direction.</summary>
-    private readonly struct PointSkyWeight(IEnclosure enclosure, Vector3 position, PointCanopy canopy) : ISkyViewWeight
+    private readonly struct PointSkyWeight(IEnclosure enclosure, BenchTops benchTops, Vector3 position, PointCanopy canopy) : ISkyViewWeight
     {
         public double Weight(Vector3 towardSky) =>
-            enclosure.SkyTransmittance(position, towardSky) * canopy.Transmission(towardSky, double.PositiveInfinity);
+            benchTops.BlocksRay(position, towardSky)
+                ? 0
+                : enclosure.SkyTransmittance(position, towardSky) * canopy.Transmission(towardSky, double.PositiveInfinity);
     }
 
     /// <summary>One point's canopy geometry, for the transmission of many directions.</summary>
