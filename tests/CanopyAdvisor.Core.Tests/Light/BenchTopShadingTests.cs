@@ -49,6 +49,6 @@ public class BenchTopShadingTests
         double a = 0.625, root = Math.Sqrt(1 + (a * a));
         double corner = 1 / (2 * Math.PI) * 2 * (a / root * Math.Atan(a / root));
         Assert.Equal(1 - (4 * corner), field.SkyViewAt(0).ViewFactor, 0.02);
-        Assert.Equal(1, field.SkyViewAt(2).ViewFactor, 9);
+        Assert.Equal(1, field.SkyViewAt(2).ViewFactor, 0.002);   // the far bench top hides only a sliver near the horizon
     }
 }
