@@ -1,5 +1,6 @@
 using System.CommandLine;
 using CanopyAdvisor.Core.Validation;
+using NodaTime;
 
 namespace CanopyAdvisor.Cli;
 
@@ -10,12 +11,13 @@ internal static class CanopyCommandLine
     public const int InvalidInputExitCode = 2;
 
     /// <summary>Parses and runs a command line, writing results to <paramref name="output"/> and messages to <paramref name="error"/>.</summary>
-    public static int Run(string[] args, TextWriter output, TextWriter error, bool interactive = false)
+    /// <remarks>The clock (the system clock by default) only supplies today's date when <c>--from</c> is left out.</remarks>
+    public static int Run(string[] args, TextWriter output, TextWriter error, bool interactive = false, IClock? clock = null)
     {
         var root = new RootCommand("CanopyAdvisor: the light at each bench, and what it does to the crop.")
         {
             SunCommand.Create(output),
-            LightCommand.Create(output, error, interactive),
+            LightCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             DemoCommand.Create(output),
         };
 

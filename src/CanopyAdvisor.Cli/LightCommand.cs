@@ -18,10 +18,10 @@ internal static class LightCommand
     /// <summary>The longest period one run may cover, days.</summary>
     public const int MaximumDays = 366;
 
-    public static Command Create(TextWriter output, TextWriter error, bool interactive)
+    public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
         var site = new Argument<string>("site") { Description = "Site file (JSON), or demo:NAME for a built-in demo site." };
-        var from = new Option<string>("--from") { Description = "First local date, ISO-8601 (e.g. 2027-03-15).", Required = true };
+        var from = new Option<string?>("--from") { Description = "First local date, ISO-8601 (e.g. 2027-03-15); default: today in the site's time zone." };
         var days = new Option<int>("--days") { Description = "Number of local days.", DefaultValueFactory = _ => 7 };
         var stepMinutes = new Option<double>("--step-minutes") { Description = "Time step in minutes.", DefaultValueFactory = _ => LightSimulation.DefaultStep.TotalMinutes };
         var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV: timestamp, ghiWm2 and/or parUmolM2S); default: clear sky × the site's daily clearness." };
@@ -32,7 +32,8 @@ internal static class LightCommand
         };
         command.SetAction(parse =>
         {
-            LocalDate first = TimeArguments.ParseDate(parse.GetValue(from)!, "--from");
+            string? fromText = parse.GetValue(from);
+            LocalDate? firstGiven = fromText is null ? null : TimeArguments.ParseDate(fromText, "--from");
             int dayCount = parse.GetValue(days);
             double minutes = parse.GetValue(stepMinutes);
             ValidateRange(dayCount, minutes);
@@ -40,6 +41,7 @@ internal static class LightCommand
 
             // Read and check every input before any computing starts: nothing is computed from half-read data.
             Site model = SiteSource.Load(parse.GetValue(site)!);
+            LocalDate first = firstGiven ?? clock.GetCurrentInstant().InZone(model.Zone).Date;
             IOutsideLightSource outside = weatherPath is null
                 ? new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather)
                 : new MeasuredOutsideLight(WeatherLogReader.ReadFile(weatherPath), model.Location);
