@@ -25,6 +25,9 @@ public static class ModelConstants
     /// <summary>Seconds per hour.</summary>
     public const double SecondsPerHour = 3600.0;
 
+    /// <summary>Seconds per day of 24 hours (86 400; a Julian day, Reda &amp; Andreas 2004).</summary>
+    public const double SecondsPerDay = 86400.0;
+
     /// <summary>Micromoles per mole.</summary>
     public const double MicromolesPerMole = 1e6;
 

@@ -6,11 +6,17 @@ public readonly record struct Angle : IComparable<Angle>
 {
     private Angle(double radians) => Radians = radians;
 
+    /// <summary>Radians in one degree, π/180.</summary>
+    public const double RadiansPerDegree = Math.PI / 180.0;
+
+    /// <summary>Degrees in one radian, 180/π.</summary>
+    public const double DegreesPerRadian = 180.0 / Math.PI;
+
     /// <summary>The angle in radians.</summary>
     public double Radians { get; }
 
     /// <summary>The angle in degrees.</summary>
-    public double Degrees => Radians * (180.0 / Math.PI);
+    public double Degrees => Radians * DegreesPerRadian;
 
     /// <summary>Zero.</summary>
     public static Angle Zero => default;
@@ -22,7 +28,7 @@ public readonly record struct Angle : IComparable<Angle>
     public static Angle FromRadians(double radians) => new(radians);
 
     /// <summary>Creates an angle from degrees.</summary>
-    public static Angle FromDegrees(double degrees) => new(degrees * (Math.PI / 180.0));
+    public static Angle FromDegrees(double degrees) => new(degrees * RadiansPerDegree);
 
     /// <summary>This angle wrapped into [0, 360°).</summary>
     public Angle Normalized()

@@ -1,3 +1,5 @@
+using CanopyAdvisor.Core.Geometry;
+
 namespace CanopyAdvisor.Core.Sky;
 
 /// <summary>
@@ -13,9 +15,9 @@ internal static class SpaAlgorithm
 {
     private const double J2000 = 2451545.0;
     private const double UnixEpochJulianDay = 2440587.5;
-    private const double SecondsPerDay = 86400.0;
-    private const double DegreesToRadians = Math.PI / 180.0;
-    private const double RadiansToDegrees = 180.0 / Math.PI;
+    private const double SecondsPerDay = ModelConstants.SecondsPerDay;
+    private const double DegreesToRadians = Angle.RadiansPerDegree;
+    private const double RadiansToDegrees = Angle.DegreesPerRadian;
 
     /// <summary>Julian day of an instant given as seconds since 1970-01-01T00:00Z (UTC) plus ΔUT1 (report eq. 4).</summary>
     /// <remarks>

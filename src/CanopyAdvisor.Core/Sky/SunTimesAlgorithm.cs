@@ -11,9 +11,9 @@ namespace CanopyAdvisor.Core.Sky;
 /// </summary>
 internal static class SunTimesAlgorithm
 {
-    private const double SecondsPerDay = 86400.0;
-    private const double DegreesToRadians = Math.PI / 180.0;
-    private const double RadiansToDegrees = 180.0 / Math.PI;
+    private const double SecondsPerDay = ModelConstants.SecondsPerDay;
+    private const double DegreesToRadians = Angle.RadiansPerDegree;
+    private const double RadiansToDegrees = Angle.DegreesPerRadian;
 
     // Sidereal rotation per day of mean solar time, degrees (report eq. A14).
     private const double SiderealDegreesPerDay = 360.985647;

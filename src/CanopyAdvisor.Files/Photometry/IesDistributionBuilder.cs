@@ -6,7 +6,7 @@ namespace CanopyAdvisor.Files.Photometry;
 /// <summary>Turns a validated IES grid into a lamp-frame <see cref="TabulatedDistribution"/> (conventions in <see cref="IesReader"/>).</summary>
 internal static class IesDistributionBuilder
 {
-    private const double DegreesToRadians = Math.PI / 180.0;
+    private const double DegreesToRadians = Angle.RadiansPerDegree;
 
     /// <summary>Builds the distribution of absolute intensities (file value × scale) and returns their integral as the flux.</summary>
     public static TabulatedDistribution Build(IesPhotometricType type, IesGrid grid, double scale, out double flux)

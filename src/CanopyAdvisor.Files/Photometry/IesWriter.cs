@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Validation;
 
@@ -89,8 +90,8 @@ public static class IesWriter
         var values = new IReadOnlyList<double>[horizontalAnglesDeg.Count];
         for (int h = 0; h < values.Length; h++)
         {
-            double around = horizontalAnglesDeg[h] * Math.PI / 180;
-            values[h] = [.. verticalAnglesDeg.Select(v => photonFluxMicromolesPerSecond * distribution.IntensityPerUnitFlux(v * Math.PI / 180, around))];
+            double around = horizontalAnglesDeg[h] * Angle.RadiansPerDegree;
+            values[h] = [.. verticalAnglesDeg.Select(v => photonFluxMicromolesPerSecond * distribution.IntensityPerUnitFlux(v * Angle.RadiansPerDegree, around))];
         }
 
         return new IesGrid([.. verticalAnglesDeg], [.. horizontalAnglesDeg], values);

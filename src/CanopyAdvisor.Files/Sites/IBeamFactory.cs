@@ -1,6 +1,6 @@
-using CanopyAdvisor.Files.Photometry;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
+using CanopyAdvisor.Files.Photometry;
 
 namespace CanopyAdvisor.Files.Sites;
 

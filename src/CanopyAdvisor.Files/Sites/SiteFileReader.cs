@@ -1,12 +1,12 @@
-using CanopyAdvisor.Files.Photometry;
 using System.Globalization;
 using System.Text.Json;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Validation;
-using NodaTime;
+using CanopyAdvisor.Files.Photometry;
 using NodaTime.Text;
+using NodaTime;
 
 namespace CanopyAdvisor.Files.Sites;
 

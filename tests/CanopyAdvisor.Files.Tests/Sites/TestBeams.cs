@@ -1,7 +1,7 @@
-using CanopyAdvisor.Files.Photometry;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Photometry;
 using CanopyAdvisor.Files.Sites;
 
 namespace CanopyAdvisor.Files.Tests.Sites;
