@@ -1,11 +1,25 @@
 #!/usr/bin/env bash
 # The project's one test command (README "Run the tests"). It installs what the tests need, then runs them all.
+# Today the tests need only the .NET SDK and NuGet packages (restored below); the sun-position reference table in
+# tests/reference/ is committed, so PyEphem is needed only to regenerate it (DEVELOPERS.md).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 if ! command -v dotnet >/dev/null 2>&1; then
   echo "The .NET 10 SDK is required (dotnet on PATH)." >&2
   exit 1
 fi
+log=$(mktemp)
+trap 'rm -f "$log"' EXIT
 dotnet restore CanopyAdvisor.sln
 dotnet build CanopyAdvisor.sln -c Release --no-restore
-dotnet test CanopyAdvisor.sln -c Release --no-build --logger "console;verbosity=normal"
+set +e
+dotnet test CanopyAdvisor.sln -c Release --no-build --logger "console;verbosity=minimal" 2>&1 | tee "$log"
+status=${PIPESTATUS[0]}
+set -e
+# One closing line over all test projects, in the plain "N passed, N failed" form.
+awk '/(Passed|Failed)!  - /{
+       for (i = 1; i <= NF; i++) {
+         if ($i == "Failed:") f += $(i+1); if ($i == "Passed:") p += $(i+1); if ($i == "Skipped:") s += $(i+1)
+       }
+     } END { gsub(/,/, "", p); printf "Tests: %d passed, %d failed, %d skipped\n", p, f, s }' "$log"
+exit "$status"
