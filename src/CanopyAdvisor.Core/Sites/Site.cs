@@ -26,4 +26,11 @@ public sealed record Site(
     ImmutableArray<Bench> Benches,
     ImmutableArray<Lamp> Lamps,
     ImmutableArray<Obstruction> Obstructions,
-    WeatherSettings Weather);
+    WeatherSettings Weather)
+{
+    /// <summary>The crop lots on the benches (none for a site that describes only light).</summary>
+    public ImmutableArray<Lot> Lots { get; init; } = [];
+
+    /// <summary>The air temperature setpoints used when no measured temperature log is given.</summary>
+    public TemperatureSetpoints Temperatures { get; init; } = TemperatureSetpoints.Default;
+}
