@@ -7,6 +7,7 @@ using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Structures;
 using CanopyAdvisor.Core.Validation;
 using CanopyAdvisor.Files.Weather;
+using CanopyAdvisor.Reports;
 using NodaTime;
 using NodaTime.Text;
 
@@ -26,9 +27,10 @@ internal static class LightCommand
         var stepMinutes = new Option<double>("--step-minutes") { Description = "Time step in minutes.", DefaultValueFactory = _ => LightSimulation.DefaultStep.TotalMinutes };
         var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV: timestamp, ghiWm2 and/or parUmolM2S); default: clear sky × the site's daily clearness." };
         var json = new Option<bool>("--json") { Description = "Print JSON instead of a table." };
+        var map = new Option<string?>("--map") { Description = "Also write a floor map (SVG) of DLI per sample cell with the light vector of each bench." };
         var command = new Command("light", "The light on each bench, day by day: PPFD, DLI, uniformity, light vector, blue vector, R:FR.")
         {
-            site, from, days, stepMinutes, weather, json,
+            site, from, days, stepMinutes, weather, json, map,
         };
         command.SetAction(parse =>
         {
@@ -53,6 +55,13 @@ internal static class LightCommand
                 field, outside, first, first.PlusDays(dayCount - 1), Duration.FromMinutes(minutes), progress);
 
             LightReport report = LightReportBuilder.Build(model, summary, dayCount, weatherPath);
+            if (parse.GetValue(map) is string mapPath)
+            {
+                string title = $"{model.Name}: light {report.From}, {dayCount} day(s)";
+                File.WriteAllText(mapPath, LightMapSvg.Render(model, summary, title));
+                error.WriteLine($"map written to {mapPath}");
+            }
+
             if (parse.GetValue(json))
             {
                 JsonOutput.Write(output, report);

@@ -76,6 +76,15 @@ public sealed class LightCommandTests : IDisposable
     }
 
     [Fact]
+    public void Map_option_writes_an_svg_file()
+    {
+        string map = Path.Combine(_directory, "light.svg");
+        var (code, _, error) = CliRunner.Run("light", "demo:indoor-farm", "--from", "2026-12-14", "--days", "1", "--map", map);
+        Assert.True(code == 0, error);
+        Assert.StartsWith("<svg", File.ReadAllText(map), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Bad_site_file_is_rejected_with_every_path_and_nothing_printed()
     {
         string broken = OneLampRoom
