@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Globalization;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
@@ -537,14 +538,17 @@ public static class SiteValidator
         }
 
         Instant? from = datesOrdered ? lot.PlantedOn.AtStartOfDayInZone(zone).ToInstant() : null;
-        Instant? until = datesOrdered ? lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(zone).ToInstant() : null;
-        for (int r = 0; r < lot.Rotations.Length; r++)
+        Instant? until = !datesOrdered ? null
+            : lot.MeasuredOn < LocalDate.MaxIsoValue ? lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(zone).ToInstant()
+            : Instant.MaxValue;
+        ImmutableArray<RotationRecord> rotations = lot.Rotations.IsDefault ? [] : lot.Rotations;
+        for (int r = 0; r < rotations.Length; r++)
         {
-            RotationRecord rotation = lot.Rotations[r];
+            RotationRecord rotation = rotations[r];
             string rp = string.Create(CultureInfo.InvariantCulture, $"{path}.rotations[{r}]");
-            if (r > 0 && rotation.At < lot.Rotations[r - 1].At)
+            if (r > 0 && rotation.At < rotations[r - 1].At)
             {
-                errors.Add(new($"{rp}.at", $"must not be before rotations[{r - 1}] ({IsoInstant(rotation.At)} is before {IsoInstant(lot.Rotations[r - 1].At)}); list rotations in time order"));
+                errors.Add(new($"{rp}.at", $"must not be before rotations[{r - 1}] ({IsoInstant(rotation.At)} is before {IsoInstant(rotations[r - 1].At)}); list rotations in time order"));
             }
 
             if (from is Instant f && rotation.At < f)
