@@ -527,9 +527,10 @@ public static class SiteValidator
         {
             double needM2 = lot.Pots * lot.SpacingM * lot.SpacingM;
             double areaM2 = bench.Footprint.LengthM * bench.Footprint.WidthM;
-            if (needM2 > areaM2 * PotsFitFactor)
+            // A relative slack of 1e-9 keeps a count exactly at the limit (1680 × 0.15² = 36 × 1.05) from failing on rounding.
+            if (needM2 > areaM2 * PotsFitFactor * (1 + 1e-9))
             {
-                int most = (int)Math.Floor(areaM2 * PotsFitFactor / (lot.SpacingM * lot.SpacingM));
+                int most = (int)Math.Floor((areaM2 * PotsFitFactor / (lot.SpacingM * lot.SpacingM)) + 1e-6);
                 errors.Add(new(
                     $"{path}.pots",
                     $"{lot.Pots} pots at {Format(lot.SpacingM)} m spacing need {Format(needM2)} m², more than bench '{bench.Id}' holds "
