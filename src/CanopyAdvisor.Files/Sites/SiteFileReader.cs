@@ -15,8 +15,9 @@ namespace CanopyAdvisor.Files.Sites;
 /// <para>
 /// Every problem is reported, each with a path in the file's own names (<c>benches[3].footprint.widthM: must be &gt; 0</c>):
 /// malformed JSON (with line and byte), wrong JSON types, missing required and unknown properties, unknown time
-/// zones, lamp and cover types, and then every range and geometry rule of <see cref="SiteValidator"/>. On any
-/// problem the reader throws <see cref="InvalidInputException"/> with all of them; it never returns a partly built site.
+/// zones, lamp and cover types, dates and times not in ISO-8601 form, and then every range and geometry rule of
+/// <see cref="SiteValidator"/> (lots and temperature setpoints included). On any problem the reader throws
+/// <see cref="InvalidInputException"/> with all of them; it never returns a partly built site.
 /// </para>
 /// <para>
 /// To report range problems in parts of the file that did parse while other parts did not, the reader validates a
@@ -792,11 +793,15 @@ public sealed class SiteFileReader
                 List<RotationRecord> rotations = ReadRotations(o);
                 o.Finish();
 
-                // Checks that need all three dates (and the zone) are left out when one of them is unknown.
-                if (planted is null || sale is null || measured is null || zone is null)
+                // Checks that need all three dates are left out when one of them is unknown; rotation times also need the zone.
+                if (planted is null || sale is null || measured is null)
                 {
                     unknown.Add(o.PathOf("saleOn"));
                     unknown.Add(o.PathOf("measuredOn"));
+                }
+
+                if (planted is null || sale is null || measured is null || zone is null)
+                {
                     foreach (int r in Enumerable.Range(0, rotations.Count))
                     {
                         unknown.Add($"{JsonObjectReader.Item(o.PathOf("rotations"), r)}.at");

@@ -121,4 +121,13 @@ public class SiteFileLotsTests
         ValidationError only = Assert.Single(e.Errors);
         Assert.Equal("lots[0].rotations[1].at", only.Path);
     }
+
+    [Fact]
+    public void Unknown_time_zone_still_reports_date_order()
+    {
+        // Date order does not need the zone; only the rotation window does (README "lots[]").
+        InvalidInputException e = Reject(SiteJson.With(SiteJson.Glasshouse, ("timeZone", "\"Europe/Atlantis\""), ("lots[0].saleOn", "\"2026-11-01\"")));
+
+        Assert.Equal(["lots[0].saleOn", "timeZone"], e.Errors.Select(x => x.Path).Order(StringComparer.Ordinal));
+    }
 }
