@@ -13,7 +13,8 @@ namespace CanopyAdvisor.Core.Sites;
 /// <para>
 /// Two kinds of check: the range of each value (sizes &gt; 0, fractions in [0, 1], latitude within ±90°, …) and the
 /// geometry of the parts together (benches inside the structure and under its gutters or ceiling, lamps inside
-/// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids). Paths use the site
+/// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids), plus the crop
+/// lots against their benches and dates and the temperature setpoints. Paths use the site
 /// file's names (see <see cref="SitePaths"/>). The same problem reported for several lamps that share a type or
 /// several surfaces that share a cover is listed once.
 /// </para>
