@@ -1,7 +1,10 @@
+using System.Collections.Immutable;
 using System.Globalization;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Validation;
+using NodaTime;
+using NodaTime.Text;
 
 namespace CanopyAdvisor.Core.Sites;
 
@@ -10,7 +13,8 @@ namespace CanopyAdvisor.Core.Sites;
 /// <para>
 /// Two kinds of check: the range of each value (sizes &gt; 0, fractions in [0, 1], latitude within ±90°, …) and the
 /// geometry of the parts together (benches inside the structure and under its gutters or ceiling, lamps inside
-/// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids). Paths use the site
+/// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids), plus the crop
+/// lots against their benches and dates and the temperature setpoints. Paths use the site
 /// file's names (see <see cref="SitePaths"/>). The same problem reported for several lamps that share a type or
 /// several surfaces that share a cover is listed once.
 /// </para>
@@ -50,6 +54,33 @@ public static class SiteValidator
 
     /// <summary>Largest Linke turbidity accepted, 10 (very hazy air is about 6–7; from memory).</summary>
     public const double MaxLinkeTurbidity = 10;
+
+    /// <summary>Lowest temperature setpoint accepted, −10 °C.</summary>
+    public const double MinSetpointC = -10;
+
+    /// <summary>Highest temperature setpoint accepted, 45 °C.</summary>
+    public const double MaxSetpointC = 45;
+
+    /// <summary>Most the night setpoint may exceed the day setpoint, 10 °C (a negative DIF deeper than this is not a setting in use).</summary>
+    public const double MaxNightAboveDayC = 10;
+
+    /// <summary>Deepest pre-dawn drop accepted, 15 °C.</summary>
+    public const double MaxPreDawnDropC = 15;
+
+    /// <summary>Longest pre-dawn drop accepted, 12 h.</summary>
+    public const double MaxPreDawnDropHours = 12;
+
+    /// <summary>Tallest plant height accepted, 3,000 mm (exclusive).</summary>
+    public const double MaxLotHeightMm = 3000;
+
+    /// <summary>Widest pot spacing accepted, 5 m (exclusive).</summary>
+    public const double MaxLotSpacingM = 5;
+
+    /// <summary>
+    /// How far the pots' square cells (pots × spacing²) may exceed the bench area, as a factor: 1.05, which allows
+    /// pots overhanging the bench edge a little (common practice).
+    /// </summary>
+    public const double PotsFitFactor = 1.05;
 
     /// <summary>The glasshouse surface names, in the order they appear in the site file.</summary>
     public static IReadOnlyList<string> GlasshouseSurfaces { get; } = ["roof", "leftWall", "rightWall", "frontWall", "backWall"];
@@ -104,6 +135,15 @@ public static class SiteValidator
         errors.AddRange(CheckUniqueIds(site.Benches.Select(b => b.Id), paths.Bench, "bench"));
         errors.AddRange(CheckUniqueIds(site.Lamps.Select(l => l.Id), paths.Lamp, "lamp"));
         errors.AddRange(CheckUniqueIds(site.Obstructions.Select(o => o.Id), paths.Obstruction, "obstruction"));
+
+        errors.AddRange(CheckTemperatures(site.Temperatures, "temperatures"));
+        for (int i = 0; i < site.Lots.Length; i++)
+        {
+            errors.AddRange(CheckLot(site.Lots[i], LotPath(i), site.Benches, site.Zone));
+        }
+
+        errors.AddRange(CheckUniqueIds(site.Lots.Select(l => l.Id), LotPath, "lot"));
+        errors.AddRange(CheckOneLotPerBench(site.Lots, LotPath));
 
         return errors.Distinct().ToList();
     }
@@ -398,6 +438,167 @@ public static class SiteValidator
         return Collect(Positive(footprint.LengthM, $"{path}.lengthM"), Positive(footprint.WidthM, $"{path}.widthM"));
     }
 
+    /// <summary>The path of the lot at an index of <see cref="Site.Lots"/>: <c>lots[i]</c> (the same in code and in the site file).</summary>
+    public static string LotPath(int index) => string.Create(CultureInfo.InvariantCulture, $"lots[{index}]");
+
+    /// <summary>
+    /// Temperature setpoints: day, night within [−10, 45] °C; night at most 10 °C above day; pre-dawn drop within
+    /// [0, 15] °C; its length within [0, 12] h.
+    /// </summary>
+    public static IEnumerable<ValidationError> CheckTemperatures(TemperatureSetpoints temperatures, string path)
+    {
+        ArgumentNullException.ThrowIfNull(temperatures);
+        var errors = Collect(
+            Within(temperatures.DayC, MinSetpointC, MaxSetpointC, $"{path}.dayC"),
+            Within(temperatures.NightC, MinSetpointC, MaxSetpointC, $"{path}.nightC"),
+            Within(temperatures.PreDawnDropC, 0, MaxPreDawnDropC, $"{path}.preDawnDropC"),
+            Within(temperatures.PreDawnDropHours, 0, MaxPreDawnDropHours, $"{path}.preDawnDropHours"));
+        if (temperatures.NightC > temperatures.DayC + MaxNightAboveDayC)
+        {
+            errors.Add(new(
+                $"{path}.nightC",
+                $"must be at most {Format(MaxNightAboveDayC)} °C above dayC = {Format(temperatures.DayC)} °C, got {Format(temperatures.NightC)} °C"));
+        }
+
+        return errors;
+    }
+
+    /// <summary>
+    /// A lot on its own and against its bench: id, crop id of <c>[a-z0-9-/]</c>, bench known, saleOn after plantedOn,
+    /// measuredOn within [plantedOn, saleOn], height within (0, 3000) mm, spacing within (0, 5) m, pots ≥ 1 and fitting
+    /// the bench (pots × spacing² ≤ bench area × 1.05), rotations in time order, each from the start of plantedOn to
+    /// the end of measuredOn (local days in <paramref name="zone"/>; later ones are planned, not done), each angle
+    /// within (−360°, 360°) and not 0.
+    /// </summary>
+    /// <param name="lot">The lot.</param>
+    /// <param name="path">Path of the lot, e.g. <c>lots[2]</c>.</param>
+    /// <param name="benches">The site's benches (the lot's bench is looked up by id).</param>
+    /// <param name="zone">The site's time zone, in which the lot's dates are local.</param>
+    public static IEnumerable<ValidationError> CheckLot(Lot lot, string path, IReadOnlyList<Bench> benches, DateTimeZone zone)
+    {
+        ArgumentNullException.ThrowIfNull(lot);
+        ArgumentNullException.ThrowIfNull(benches);
+        ArgumentNullException.ThrowIfNull(zone);
+        var errors = new List<ValidationError>();
+        if (string.IsNullOrWhiteSpace(lot.Id))
+        {
+            errors.Add(new($"{path}.id", "must not be empty"));
+        }
+
+        if (string.IsNullOrEmpty(lot.CropId) || !lot.CropId.All(c => c is (>= 'a' and <= 'z') or (>= '0' and <= '9') or '-' or '/'))
+        {
+            errors.Add(new($"{path}.crop", $"must be a crop id of lower-case letters, digits, '-' and '/' (e.g. \"petunia/compact\"), got '{lot.CropId}'"));
+        }
+
+        Bench? bench = benches.FirstOrDefault(b => string.Equals(b.Id, lot.BenchId, StringComparison.Ordinal));
+        if (bench is null)
+        {
+            string known = benches.Count == 0 ? "no benches defined" : "benches: " + string.Join(", ", benches.Select(b => b.Id));
+            errors.Add(new($"{path}.benchId", $"unknown bench '{lot.BenchId}' ({known})"));
+        }
+
+        bool datesOrdered = lot.SaleOn > lot.PlantedOn;
+        if (!datesOrdered)
+        {
+            errors.Add(new($"{path}.saleOn", $"must be after plantedOn ({IsoDate(lot.PlantedOn)}), got {IsoDate(lot.SaleOn)}"));
+        }
+        else if (lot.MeasuredOn < lot.PlantedOn || lot.MeasuredOn > lot.SaleOn)
+        {
+            errors.Add(new(
+                $"{path}.measuredOn",
+                $"must be within [plantedOn, saleOn] = [{IsoDate(lot.PlantedOn)}, {IsoDate(lot.SaleOn)}], got {IsoDate(lot.MeasuredOn)}"));
+        }
+
+        if (!(lot.HeightMm > 0 && lot.HeightMm < MaxLotHeightMm))
+        {
+            errors.Add(new($"{path}.heightMm", $"must be within (0, {Format(MaxLotHeightMm)}) mm, got {Format(lot.HeightMm)}"));
+        }
+
+        bool spacingOk = lot.SpacingM > 0 && lot.SpacingM < MaxLotSpacingM;
+        if (!spacingOk)
+        {
+            errors.Add(new($"{path}.spacingM", $"must be within (0, {Format(MaxLotSpacingM)}) m, got {Format(lot.SpacingM)}"));
+        }
+
+        if (lot.Pots < 1)
+        {
+            errors.Add(new($"{path}.pots", $"must be ≥ 1, got {lot.Pots}"));
+        }
+        else if (bench is not null && spacingOk && bench.Footprint.LengthM > 0 && bench.Footprint.WidthM > 0)
+        {
+            double needM2 = lot.Pots * lot.SpacingM * lot.SpacingM;
+            double areaM2 = bench.Footprint.LengthM * bench.Footprint.WidthM;
+            // A relative slack of 1e-9 keeps a count exactly at the limit (1680 × 0.15² = 36 × 1.05) from failing on rounding.
+            if (needM2 > areaM2 * PotsFitFactor * (1 + 1e-9))
+            {
+                int most = (int)Math.Floor((areaM2 * PotsFitFactor / (lot.SpacingM * lot.SpacingM)) + 1e-6);
+                errors.Add(new(
+                    $"{path}.pots",
+                    $"{lot.Pots} pots at {Format(lot.SpacingM)} m spacing need {Format(needM2)} m², more than bench '{bench.Id}' holds "
+                    + $"({Format(areaM2)} m² × {Format(PotsFitFactor)} = {Format(areaM2 * PotsFitFactor)} m², at most {most} pots)"));
+            }
+        }
+
+        Instant? from = datesOrdered ? lot.PlantedOn.AtStartOfDayInZone(zone).ToInstant() : null;
+        Instant? until = !datesOrdered ? null
+            : lot.MeasuredOn < LocalDate.MaxIsoValue ? lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(zone).ToInstant()
+            : Instant.MaxValue;
+        ImmutableArray<RotationRecord> rotations = lot.Rotations.IsDefault ? [] : lot.Rotations;
+        for (int r = 0; r < rotations.Length; r++)
+        {
+            RotationRecord rotation = rotations[r];
+            string rp = string.Create(CultureInfo.InvariantCulture, $"{path}.rotations[{r}]");
+            if (r > 0 && rotation.At < rotations[r - 1].At)
+            {
+                errors.Add(new($"{rp}.at", $"must not be before rotations[{r - 1}] ({IsoInstant(rotation.At)} is before {IsoInstant(rotations[r - 1].At)}); list rotations in time order"));
+            }
+
+            if (from is Instant f && rotation.At < f)
+            {
+                errors.Add(new($"{rp}.at", $"{IsoInstant(rotation.At)} is before the lot was planted ({IsoDate(lot.PlantedOn)})"));
+            }
+            else if (until is Instant u && rotation.At >= u && lot.MeasuredOn >= lot.PlantedOn && lot.MeasuredOn <= lot.SaleOn)
+            {
+                errors.Add(new(
+                    $"{rp}.at",
+                    $"{IsoInstant(rotation.At)} is after measuredOn ({IsoDate(lot.MeasuredOn)}): list only rotations already done; planned ones come from the rotation calendar"));
+            }
+
+            double deg = rotation.Angle.Degrees;
+            if (!(deg > -360 && deg < 360) || deg == 0)
+            {
+                errors.Add(new($"{rp}.angleDeg", $"must be within (−360, 360) and not 0, got {Format(deg)}"));
+            }
+        }
+
+        return errors;
+    }
+
+    /// <summary>At most one lot per bench: a second lot on a bench is an error at its <c>benchId</c>.</summary>
+    public static IEnumerable<ValidationError> CheckOneLotPerBench(IReadOnlyList<Lot> lots, Func<int, string> path)
+    {
+        ArgumentNullException.ThrowIfNull(lots);
+        ArgumentNullException.ThrowIfNull(path);
+        var seen = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (int i = 0; i < lots.Count; i++)
+        {
+            string benchId = lots[i].BenchId;
+            if (string.IsNullOrEmpty(benchId))
+            {
+                continue;
+            }
+
+            if (seen.TryGetValue(benchId, out int first))
+            {
+                yield return new($"{path(i)}.benchId", $"bench '{benchId}' already holds lot '{lots[first].Id}' ({path(first)}); at most one lot per bench");
+            }
+            else
+            {
+                seen[benchId] = i;
+            }
+        }
+    }
+
     /// <summary>Height of a glasshouse's roof above a point inside its footprint, metres.</summary>
     /// <remarks>Each bay's roof rises symmetrically from the gutters at its sides to the ridge in its middle.</remarks>
     public static double RoofHeightM(Glasshouse glasshouse, Vector3 point)
@@ -505,6 +706,10 @@ public static class SiteValidator
 
     private static List<ValidationError> Collect(params ValidationError?[] errors) =>
         errors.Where(e => e is not null).Select(e => e!).ToList();
+
+    private static string IsoInstant(Instant instant) => InstantPattern.General.Format(instant);
+
+    private static string IsoDate(LocalDate date) => LocalDatePattern.Iso.Format(date);
 
     private static string Format(double value) => value.ToString("0.####", CultureInfo.InvariantCulture);
 }

@@ -9,7 +9,8 @@ namespace CanopyAdvisor.Files.Sites;
 /// ridges, float-glass roof and walls, an opaque insulated north end wall, eight rolling benches, 300 toplights in
 /// rows, four side lamps on the north wall, a water tank and a boiler house to the south.
 /// <c>indoor-farm</c>: an indoor room in America/Chicago with three racks of four tiers, LED bars over each tier,
-/// 16 h and 18 h photoperiods (one past midnight), no daylight. The files are embedded resources
+/// 16 h and 18 h photoperiods (one past midnight), no daylight. Both carry temperature setpoints and one crop lot per
+/// bench, dated for the season of early December 2026 to late January 2027 (measured on 2026-12-01). The files are embedded resources
 /// <c>DemoSites.&lt;name&gt;.json</c>. Thread-safe.
 /// </remarks>
 public static class DemoSites

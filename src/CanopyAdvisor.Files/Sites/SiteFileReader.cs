@@ -15,8 +15,9 @@ namespace CanopyAdvisor.Files.Sites;
 /// <para>
 /// Every problem is reported, each with a path in the file's own names (<c>benches[3].footprint.widthM: must be &gt; 0</c>):
 /// malformed JSON (with line and byte), wrong JSON types, missing required and unknown properties, unknown time
-/// zones, lamp and cover types, and then every range and geometry rule of <see cref="SiteValidator"/>. On any
-/// problem the reader throws <see cref="InvalidInputException"/> with all of them; it never returns a partly built site.
+/// zones, lamp and cover types, dates and times not in ISO-8601 form, and then every range and geometry rule of
+/// <see cref="SiteValidator"/> (lots and temperature setpoints included). On any problem the reader throws
+/// <see cref="InvalidInputException"/> with all of them; it never returns a partly built site.
 /// </para>
 /// <para>
 /// To report range problems in parts of the file that did parse while other parts did not, the reader validates a
@@ -34,6 +35,10 @@ public sealed class SiteFileReader
     public const int MaxLampsPerRow = 1000;
 
     private static readonly LocalTimePattern TimePattern = LocalTimePattern.CreateWithInvariantCulture("HH:mm");
+
+    // ISO-8601 date-time with seconds, optional fraction and a required offset ("Z", "+01", "+01:00").
+    private static readonly OffsetDateTimePattern InstantWithOffsetPattern =
+        OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mm':'ss;FFFFFFFFFo<G>");
 
     // An indoor room has no sky: its weather is never used. A file may still give one; otherwise this fills the slot.
     private static readonly WeatherSettings IndoorWeather = new(SiteValidator.MinLinkeTurbidity, 1);
@@ -120,6 +125,7 @@ public sealed class SiteFileReader
         private readonly List<string> lampTypePaths = [];
         private readonly List<Obstruction> obstructions = [];
         private readonly List<string> obstructionPaths = [];
+        private readonly List<Lot> lots = [];
 
         public Site Run(JsonElement rootElement)
         {
@@ -152,6 +158,8 @@ public sealed class SiteFileReader
             ReadLamps(root);
             ReadLampRows(root);
             ReadObstructions(root);
+            TemperatureSetpoints temperatures = ReadTemperatures(root);
+            ReadLots(root, zone);
             root.Finish();
 
             // Validate what was built; when parts failed to parse, validate a draft so their neighbours' problems still show.
@@ -164,7 +172,11 @@ public sealed class SiteFileReader
                 [.. benches],
                 [.. lamps],
                 [.. obstructions],
-                weather);
+                weather)
+            {
+                Lots = [.. lots],
+                Temperatures = temperatures,
+            };
             var paths = new SitePaths(
                 i => benchPaths[i],
                 i => lampPaths[i],
@@ -737,6 +749,157 @@ public sealed class SiteFileReader
             lamps.Add(new Lamp(id, position, aim, type.Beam, type.PpfMicromolesPerSecond, type.Bands, dimming, type.Watts, schedule));
             lampPaths.Add(path);
             lampTypePaths.Add(typePath);
+        }
+
+        private static TemperatureSetpoints ReadTemperatures(JsonObjectReader root)
+        {
+            JsonObjectReader? o = root.Object("temperatures", required: false);
+            if (o is null)
+            {
+                return TemperatureSetpoints.Default;
+            }
+
+            double? day = o.Number("dayC");
+            double? night = o.Number("nightC");
+            double dropC = o.Number("preDawnDropC", required: false) ?? (o.Has("preDawnDropC") ? double.NaN : 0);
+            double dropHours = o.Number("preDawnDropHours", required: false) ?? (o.Has("preDawnDropHours") ? double.NaN : 0);
+            o.Finish();
+            return new TemperatureSetpoints(Num(day), Num(night), dropC, dropHours);
+        }
+
+        private void ReadLots(JsonObjectReader root, DateTimeZone? zone)
+        {
+            IReadOnlyList<(JsonElement Item, string Path)>? items = root.Array("lots", required: false);
+            foreach ((JsonElement item, string path) in items ?? [])
+            {
+                // The validator names lots by index (lots[i]); keep one draft lot per item so the indices match.
+                JsonObjectReader? o = JsonObjectReader.Open(item, path, errors);
+                if (o is null)
+                {
+                    unknown.Add(path);
+                    lots.Add(new Lot(string.Empty, string.Empty, "unread", default, default, double.NaN, default, double.NaN, 0, []));
+                    continue;
+                }
+
+                string? id = o.Text("id");
+                string? benchId = o.Text("benchId");
+                string? crop = o.Text("crop");
+                LocalDate? planted = ReadDate(o, "plantedOn");
+                LocalDate? sale = ReadDate(o, "saleOn");
+                double? height = o.Number("heightMm");
+                LocalDate? measured = ReadDate(o, "measuredOn");
+                double? spacing = o.Number("spacingM");
+                int? pots = o.Integer("pots");
+                List<RotationRecord> rotations = ReadRotations(o);
+                o.Finish();
+
+                // Checks that need all three dates are left out when one of them is unknown; rotation times also need the zone.
+                if (planted is null || sale is null || measured is null)
+                {
+                    unknown.Add(o.PathOf("saleOn"));
+                    unknown.Add(o.PathOf("measuredOn"));
+                }
+
+                if (planted is null || sale is null || measured is null || zone is null)
+                {
+                    foreach (int r in Enumerable.Range(0, rotations.Count))
+                    {
+                        unknown.Add($"{JsonObjectReader.Item(o.PathOf("rotations"), r)}.at");
+                    }
+                }
+
+                lots.Add(new Lot(
+                    id ?? string.Empty,
+                    benchId ?? string.Empty,
+                    crop ?? string.Empty,
+                    planted ?? default,
+                    sale ?? default,
+                    Num(height),
+                    measured ?? default,
+                    Num(spacing),
+                    pots ?? 0,
+                    [.. rotations]));
+            }
+        }
+
+        private List<RotationRecord> ReadRotations(JsonObjectReader lot)
+        {
+            var result = new List<RotationRecord>();
+            var unread = new List<int>();
+            IReadOnlyList<(JsonElement Item, string Path)>? items = lot.Array("rotations", required: false);
+            foreach ((JsonElement item, string path) in items ?? [])
+            {
+                JsonObjectReader? o = JsonObjectReader.Open(item, path, errors);
+                Instant? at = null;
+                double? angle = null;
+                if (o is not null)
+                {
+                    at = ReadInstant(o, "at");
+                    angle = o.Number("angleDeg");
+                    o.Finish();
+                }
+                else
+                {
+                    unknown.Add(path);
+                }
+
+                if (at is null)
+                {
+                    unread.Add(result.Count);
+                    unknown.Add($"{path}.at");
+                }
+
+                result.Add(new RotationRecord(at ?? default, Angle.FromDegrees(Num(angle))));
+            }
+
+            // A rotation whose time could not be read takes its neighbour's time, so it does not upset the order check of the next one.
+            foreach (int i in unread)
+            {
+                Instant? neighbour = result.Take(i).Select((r, k) => (r, k)).Where(t => !unread.Contains(t.k)).Select(t => (Instant?)t.r.At).LastOrDefault()
+                    ?? result.Skip(i + 1).Select((r, k) => (r, k: k + i + 1)).Where(t => !unread.Contains(t.k)).Select(t => (Instant?)t.r.At).FirstOrDefault();
+                if (neighbour is Instant n)
+                {
+                    result[i] = result[i] with { At = n };
+                }
+            }
+
+            return result;
+        }
+
+        private static LocalDate? ReadDate(JsonObjectReader o, string name)
+        {
+            string? text = o.Text(name);
+            if (text is null)
+            {
+                return null;
+            }
+
+            ParseResult<LocalDate> result = LocalDatePattern.Iso.Parse(text);
+            if (!result.Success)
+            {
+                o.Error(name, $"must be a date \"YYYY-MM-DD\", got '{text}'");
+                return null;
+            }
+
+            return result.Value;
+        }
+
+        private static Instant? ReadInstant(JsonObjectReader o, string name)
+        {
+            string? text = o.Text(name);
+            if (text is null)
+            {
+                return null;
+            }
+
+            ParseResult<OffsetDateTime> result = InstantWithOffsetPattern.Parse(text);
+            if (!result.Success)
+            {
+                o.Error(name, $"must be an ISO-8601 date and time with seconds and a UTC offset, e.g. \"2026-11-28T08:00:00+01:00\", got '{text}'");
+                return null;
+            }
+
+            return result.Value.ToInstant();
         }
 
         private void ReadObstructions(JsonObjectReader root)

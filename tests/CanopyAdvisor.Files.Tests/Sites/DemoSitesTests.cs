@@ -120,4 +120,47 @@ public class DemoSitesTests
             Assert.InRange(hours, 16, 18);
         });
     }
+
+    /// <summary>The crop ids the crop library defines for the demo sites (the demo scenario of the task, README "Demo sites").</summary>
+    [Theory]
+    [InlineData("glasshouse", "petunia,pelargonium,begonia,poinsettia,kalanchoe,basil,tomato-transplant,tagetes")]
+    [InlineData("indoor-farm", "radish-microgreens,pea-shoots,sunflower-microgreens,basil,lettuce-transplant")]
+    public void Demo_lots_stand_one_per_bench_with_the_library_crops(string name, string crops)
+    {
+        Site site = Load(name);
+
+        Assert.Equal(site.Benches.Select(b => b.Id).Order(StringComparer.Ordinal), site.Lots.Select(l => l.BenchId).Order(StringComparer.Ordinal));
+        Assert.Equal(crops.Split(',').Order(StringComparer.Ordinal), site.Lots.Select(l => l.CropId).Distinct().Order(StringComparer.Ordinal));
+
+        // Dated for the season the README names: measured early December 2026, not sold before the measurement.
+        Assert.All(site.Lots, l => Assert.Equal(new LocalDate(2026, 12, 1), l.MeasuredOn));
+        Assert.Contains(site.Lots, l => !l.Rotations.IsEmpty);
+    }
+
+    [Fact]
+    public void Glasshouse_demo_lots_fit_the_season()
+    {
+        Site site = Load("glasshouse");
+
+        // README "Demo sites": planted in November 2026, sold January–February 2027; 20/17 °C with a 3 °C, 2 h pre-dawn drop
+        // (within the 2.8–8.3 °C, 2–3 h practice, common practice).
+        Assert.All(site.Lots, l => Assert.Equal((2026, 11), (l.PlantedOn.Year, l.PlantedOn.Month)));
+        Assert.All(site.Lots, l => Assert.True(l.SaleOn.Year == 2027 && l.SaleOn.Month is 1 or 2, l.Id));
+        Assert.Equal(new TemperatureSetpoints(20, 17, 3, 2), site.Temperatures);
+
+        // A lot's plants are shorter than its bench's canopy is tall (the canopy is the light model's crop layer).
+        Assert.All(site.Lots, l => Assert.True(l.HeightMm / 1000 <= site.Benches.Single(b => b.Id == l.BenchId).Canopy.HeightM, l.Id));
+    }
+
+    [Fact]
+    public void Indoor_demo_lots_are_short_crops()
+    {
+        Site site = Load("indoor-farm");
+
+        // README "Demo sites": sown a few days before 2026-12-01, sold 7–21 days after sowing; 22/20 °C, no drop.
+        Assert.All(site.Lots, l => Assert.InRange(Period.Between(l.PlantedOn, new LocalDate(2026, 12, 1), PeriodUnits.Days).Days, 1, 9));
+        Assert.All(site.Lots, l => Assert.InRange(Period.Between(l.PlantedOn, l.SaleOn, PeriodUnits.Days).Days, 7, 21));
+        Assert.Equal(new TemperatureSetpoints(22, 20, 0, 0), site.Temperatures);
+        Assert.All(site.Lots, l => Assert.True(l.HeightMm / 1000 <= site.Benches.Single(b => b.Id == l.BenchId).Canopy.HeightM, l.Id));
+    }
 }

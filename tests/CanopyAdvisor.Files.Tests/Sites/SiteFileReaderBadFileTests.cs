@@ -94,6 +94,56 @@ public class SiteFileReaderBadFileTests
         { "Linke turbidity below 1 (Ineichen & Perez 2002: 1 = clean dry air)", G, "weather.linkeTurbidity", "0.5", "weather.linkeTurbidity", "must be within [1, 10]" },
         { "glasshouse without weather (README: required for a glasshouse)", G, "weather", SiteJson.Remove, "weather", "is required" },
 
+        // Lots (README "lots[]": one case per rule).
+        { "lot on an unknown bench (README: benchId names a bench)", G, "lots[0].benchId", "\"b9\"", "lots[0].benchId", "unknown bench 'b9' (benches: b1)" },
+        {
+            "duplicate lot id (README: unique ids)", G, "lots[1]",
+            """{ "id": "lot-1", "benchId": "b1", "crop": "basil", "plantedOn": "2026-11-20", "saleOn": "2027-01-15", "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 100 }""",
+            "lots[1].id", "duplicate lot id 'lot-1' (first used at lots[0])"
+        },
+        {
+            "second lot on a bench (README: at most one lot per bench)", G, "lots[1]",
+            """{ "id": "lot-2", "benchId": "b1", "crop": "basil", "plantedOn": "2026-11-20", "saleOn": "2027-01-15", "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 100 }""",
+            "lots[1].benchId", "bench 'b1' already holds lot 'lot-1' (lots[0]); at most one lot per bench"
+        },
+        { "sale before planting (README: saleOn after plantedOn)", G, "lots[0].saleOn", "\"2026-11-01\"", "lots[0].saleOn", "must be after plantedOn (2026-11-20), got 2026-11-01" },
+        { "sale on the planting day (README: strictly after)", G, "lots[0].saleOn", "\"2026-11-20\"", "lots[0].saleOn", "must be after plantedOn (2026-11-20), got 2026-11-20" },
+        { "measured before planting (README: within [plantedOn, saleOn])", G, "lots[0].measuredOn", "\"2026-11-19\"", "lots[0].measuredOn", "must be within [plantedOn, saleOn] = [2026-11-20, 2027-01-15], got 2026-11-19" },
+        { "measured after sale (README: within [plantedOn, saleOn])", G, "lots[0].measuredOn", "\"2027-01-16\"", "lots[0].measuredOn", "must be within [plantedOn, saleOn] = [2026-11-20, 2027-01-15], got 2027-01-16" },
+        { "height 0 mm (README: (0, 3000))", G, "lots[0].heightMm", "0", "lots[0].heightMm", "must be within (0, 3000) mm, got 0" },
+        { "height 3000 mm (README: (0, 3000))", G, "lots[0].heightMm", "3000", "lots[0].heightMm", "must be within (0, 3000) mm, got 3000" },
+        { "spacing 0 m (README: (0, 5))", G, "lots[0].spacingM", "0", "lots[0].spacingM", "must be within (0, 5) m, got 0" },
+        { "spacing 5 m (README: (0, 5))", G, "lots[0].spacingM", "5", "lots[0].spacingM", "must be within (0, 5) m, got 5" },
+        { "no pots (README: ≥ 1)", G, "lots[0].pots", "0", "lots[0].pots", "must be ≥ 1, got 0" },
+        // 10 m × 1.8 m = 18 m², × 1.05 = 18.9 m²; 1400 × 0.12² = 20.16 m² (README: pots × spacing² ≤ area × 1.05, common practice).
+        { "1400 pots at 0.12 m on 18 m² (common practice: pots × spacing² ≤ area × 1.05)", G, "lots[0].pots", "1400", "lots[0].pots", "1400 pots at 0.12 m spacing need 20.16 m², more than bench 'b1' holds (18 m² × 1.05 = 18.9 m², at most 1312 pots)" },
+        { "crop id with capitals (README: [a-z0-9-/])", G, "lots[0].crop", "\"Petunia\"", "lots[0].crop", "must be a crop id of lower-case letters, digits, '-' and '/'" },
+        { "empty lot id (README: ids non-empty)", G, "lots[0].id", "\"\"", "lots[0].id", "must not be empty" },
+        { "date not ISO (ISO 8601 calendar date)", G, "lots[0].plantedOn", "\"20/11/2026\"", "lots[0].plantedOn", "must be a date \"YYYY-MM-DD\", got '20/11/2026'" },
+        { "no 31 November (ISO 8601 calendar date)", G, "lots[0].saleOn", "\"2026-11-31\"", "lots[0].saleOn", "must be a date \"YYYY-MM-DD\"" },
+        {
+            "rotations out of order (README: in time order)", G, "lots[0].rotations",
+            """[ { "at": "2026-11-28T08:00:00+01:00", "angleDeg": 180 }, { "at": "2026-11-25T08:00:00+01:00", "angleDeg": 90 } ]""",
+            "lots[0].rotations[1].at", "list rotations in time order"
+        },
+        { "rotation before planting (README: from the start of plantedOn)", G, "lots[0].rotations[0].at", "\"2026-11-19T23:00:00+01:00\"", "lots[0].rotations[0].at", "is before the lot was planted (2026-11-20)" },
+        { "rotation after the measurement is planned, not done (README)", G, "lots[0].rotations[0].at", "\"2026-12-02T08:00:00+01:00\"", "lots[0].rotations[0].at", "is after measuredOn (2026-12-01): list only rotations already done" },
+        // 23:30 UTC on 1 December is 00:30 on 2 December in Amsterdam (UTC+1 in winter, IANA tz database).
+        { "rotation late on measuredOn in UTC is the next local day (IANA tz)", G, "lots[0].rotations[0].at", "\"2026-12-01T23:30:00Z\"", "lots[0].rotations[0].at", "is after measuredOn (2026-12-01)" },
+        { "rotation angle 0 (README: not 0)", G, "lots[0].rotations[0].angleDeg", "0", "lots[0].rotations[0].angleDeg", "must be within (−360, 360) and not 0, got 0" },
+        { "rotation angle 360 (README: (−360, 360))", G, "lots[0].rotations[0].angleDeg", "360", "lots[0].rotations[0].angleDeg", "must be within (−360, 360) and not 0, got 360" },
+        { "timestamp without offset (ISO 8601 with UTC offset)", G, "lots[0].rotations[0].at", "\"2026-11-28T08:00:00\"", "lots[0].rotations[0].at", "must be an ISO-8601 date and time with seconds and a UTC offset" },
+        { "rotation with a misspelt field (README: no unknown names)", G, "lots[0].rotations[0].angleDg", "90", "lots[0].rotations[0].angleDg", "unknown property; did you mean 'angleDeg'?" },
+
+        // Temperature setpoints (README "temperatures").
+        { "day setpoint 46 °C (README: [−10, 45])", G, "temperatures.dayC", "46", "temperatures.dayC", "must be within [-10, 45], got 46" },
+        { "night setpoint −11 °C (README: [−10, 45])", G, "temperatures.nightC", "-11", "temperatures.nightC", "must be within [-10, 45], got -11" },
+        { "night 31 °C over a 20 °C day (README: night ≤ day + 10)", G, "temperatures.nightC", "31", "temperatures.nightC", "must be at most 10 °C above dayC = 20 °C, got 31 °C" },
+        { "negative pre-dawn drop (README: [0, 15])", G, "temperatures.preDawnDropC", "-1", "temperatures.preDawnDropC", "must be within [0, 15], got -1" },
+        { "pre-dawn drop 16 °C (README: [0, 15])", G, "temperatures.preDawnDropC", "16", "temperatures.preDawnDropC", "must be within [0, 15], got 16" },
+        { "pre-dawn drop 13 h (README: [0, 12])", G, "temperatures.preDawnDropHours", "13", "temperatures.preDawnDropHours", "must be within [0, 12], got 13" },
+        { "setpoints without a day value (README: dayC required)", G, "temperatures.dayC", SiteJson.Remove, "temperatures.dayC", "is required" },
+
         // The shape of the file (README: format).
         { "unknown property (README: no unknown names)", G, "benches[0].colour", "2", "benches[0].colour", "unknown property (expected one of: canopy, footprint, id," },
         { "misspelt property gets a hint (README: no unknown names)", G, "benches[0].footprint.widhtM", "2", "benches[0].footprint.widhtM", "unknown property; did you mean 'widthM'?" },

@@ -8,7 +8,7 @@ namespace CanopyAdvisor.Files.Tests.Sites;
 /// <summary>Small valid site files for tests, and a way to change one value in them by its path.</summary>
 internal static partial class SiteJson
 {
-    /// <summary>A two-bay glasshouse, 20 m × 16 m, one bench, one side lamp, one row of three toplights, one obstruction.</summary>
+    /// <summary>A two-bay glasshouse, 20 m × 16 m, one bench, one side lamp, one row of three toplights, one obstruction, setpoints and one lot.</summary>
     public const string Glasshouse = """
         {
           "formatVersion": 1,
@@ -51,6 +51,12 @@ internal static partial class SiteJson
           "obstructions": [
             { "id": "tank", "footprint": { "cornerXM": 2, "cornerYM": -10, "axisAzimuthDeg": 0, "lengthM": 5, "widthM": 5 },
               "baseHeightM": 0, "topHeightM": 6 }
+          ],
+          "temperatures": { "dayC": 20, "nightC": 17, "preDawnDropC": 3, "preDawnDropHours": 2 },
+          "lots": [
+            { "id": "lot-1", "benchId": "b1", "crop": "petunia/compact", "plantedOn": "2026-11-20", "saleOn": "2027-01-15",
+              "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 800,
+              "rotations": [ { "at": "2026-11-28T08:00:00+01:00", "angleDeg": 180 } ] }
           ]
         }
         """;

@@ -51,6 +51,18 @@ public class SiteSchemaTests
     [InlineData("coverTypes.glass.layers", SiteJson.Remove, "glazing needs its layers")]
     [InlineData("weather", SiteJson.Remove, "glasshouse needs weather")]
     [InlineData("formatVersion", "2", "format version")]
+    [InlineData("lots[0].heightMm", "0", "lot height > 0")]
+    [InlineData("lots[0].spacingM", "5", "spacing below 5 m")]
+    [InlineData("lots[0].pots", "0", "at least one pot")]
+    [InlineData("lots[0].crop", "\"Petunia\"", "crop id form")]
+    [InlineData("lots[0].plantedOn", "\"20 Nov 2026\"", "date form")]
+    [InlineData("lots[0].rotations[0].at", "\"2026-11-28T08:00:00\"", "timestamp needs an offset")]
+    [InlineData("lots[0].rotations[0].angleDeg", "0", "rotation angle not 0")]
+    [InlineData("lots[0].rotations[0].angleDeg", "-360", "rotation angle above −360")]
+    [InlineData("lots[0].benchId", SiteJson.Remove, "lot needs its bench")]
+    [InlineData("temperatures.dayC", "46", "day setpoint range")]
+    [InlineData("temperatures.preDawnDropHours", "13", "drop hours range")]
+    [InlineData("temperatures.nightC", SiteJson.Remove, "night setpoint required")]
     public void Schema_and_reader_reject_the_same_change(string path, string valueJson, string label)
     {
         string json = SiteJson.With(SiteJson.Glasshouse, (path, valueJson));
