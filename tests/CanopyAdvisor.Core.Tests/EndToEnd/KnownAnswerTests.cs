@@ -128,4 +128,40 @@ public sealed class KnownAnswerTests
         Assert.Equal(normal * cosZenith, light[index].HorizontalPpfd, 9);
         Assert.Equal(0, (light[index].LightVector - (normal * sun)).Length, 9);
     }
+    // Diffuse sky through a flat glass roof (Duffie & Beckman ch. 5, diffuse radiation): an isotropic sky of horizontal
+    // PAR DHI seen through a horizontal cover gives DHI · τ_d · (1 − shading) on a horizontal surface, with
+    // τ_d = 2 ∫₀^{π/2} τ(θ) cos θ sin θ dθ (integrated here by the midpoint rule with 4000 intervals of the hand formula
+    // above; Brandemuehl & Beckman summarise it as τ at about 60°, from memory). The point is in the middle of a
+    // 200 m × 200 m house with a flat roof 4 m up, so the walls fill only the sky below 1.7° elevation, a cosine-weighted
+    // share sin² 1.7° = 0.09 %. Tolerance 0.5 %: the documented accuracy of the default sky quadrature for a smooth weight
+    // (HemisphereQuadrature: below 0.5 % at 16 bands) plus that wall share. The sky vector of an isotropic sky seen through
+    // a horizontal cover points straight up (MODEL.md §3), so the light vector's horizontal part must vanish.
+    [Fact]
+    public void Isotropic_sky_through_a_flat_glass_roof_gives_the_diffuse_transmittance()
+    {
+        const double Shading = 0.12, Dhi = 200;
+        var house = new Glasshouse(
+            new Footprint(-100, -100, Angle.Zero, 200, 200), 1, 200, 4, Angle.Zero,
+            Glass, Glass, Glass, Glass, Glass, Shading);
+        Site site = MakeSite(house, [OnePoint("middle", 0, 0)], []);
+        Assert.Empty(SiteValidator.Validate(site));
+        CompiledLightField field = LightFieldCompiler.Compile(site, EnclosureBuilder.Build(site));
+
+        var outside = new OutsideLight(Instant.FromUtc(2026, 1, 10, 12, 0), -Vector3.UnitZ, 0, Dhi, Dhi);
+        var light = new PointLight[1];
+        field.Step(outside, new LocalTime(13, 0), light);
+
+        const int Intervals = 4000;
+        double h = Math.PI / 2 / Intervals, tauD = 0;
+        for (int i = 0; i < Intervals; i++)
+        {
+            double theta = (i + 0.5) * h;
+            tauD += 2 * DuffieBeckmanTau(theta * 180 / Math.PI, N, K, L, 1) * Math.Cos(theta) * Math.Sin(theta) * h;
+        }
+
+        double expected = Dhi * tauD * (1 - Shading);
+        Assert.InRange(light[0].HorizontalPpfd, expected * 0.995, expected * 1.005);
+        Assert.True(Math.Abs(light[0].LightVector.X) < 1e-9 * Dhi && Math.Abs(light[0].LightVector.Y) < 1e-6 * Dhi,
+            $"horizontal part of the sky vector: {light[0].LightVector}");
+    }
 }
