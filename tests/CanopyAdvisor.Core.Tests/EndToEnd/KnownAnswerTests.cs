@@ -164,4 +164,57 @@ public sealed class KnownAnswerTests
         Assert.True(Math.Abs(light[0].LightVector.X) < 1e-9 * Dhi && Math.Abs(light[0].LightVector.Y) < 1e-6 * Dhi,
             $"horizontal part of the sky vector: {light[0].LightVector}");
     }
+    // Low sun through the walls of the same kind of house (20 m × 40 m, ridge north, gutter 4 m), points 1 m inside a wall
+    // at 1.0 m height, so the ray leaves through the wall below the gutter (it rises only cot z ≤ 0.39 m per metre). For a
+    // vertical wall with outward normal n̂ and the sun û = (sin z sin a, sin z cos a, cos z): cos θ = û·n̂.
+    //   front (south) wall, twin-wall sheet of two layers (n = 1.586, K = 10 m⁻¹, L = 1 mm; polycarbonate values from
+    //   memory), sun at a = 180°, z = 70°: cos θ = sin 70° → θ = 20°; at a = 200°: cos θ = sin 70° cos 20° = 0.8830 → θ = 27.99°;
+    //   left (west) wall, float glass, sun at a = 270°, z = 75°: θ = 15°;
+    //   back (north) wall opaque: no beam at all.
+    [Theory]
+    [InlineData("front", 180, 70, 2)]
+    [InlineData("front", 200, 70, 2)]
+    [InlineData("west", 270, 75, 1)]
+    [InlineData("back", 0, 70, 0)]
+    public void Low_sun_through_a_wall_gives_the_fresnel_beam(string bench, double sunAzimuthDeg, double sunZenithDeg, int layers)
+    {
+        const double Shading = 0.1, Dni = 800;
+        var twinWall = new Cover("twin-wall sheet", false, 1.586, 10, 0.001, 2);
+        var house = new Glasshouse(
+            new Footprint(0, 0, Angle.Zero, 40, 20), 1, 20, 4, Angle.FromDegrees(12),
+            Roof: Glass, LeftWall: Glass, RightWall: Glass, FrontWall: twinWall, BackWall: Cover.OpaqueSurface("panel"), Shading);
+        Site site = MakeSite(house, [OnePoint("front", 10, 1), OnePoint("west", 1, 20), OnePoint("back", 10, 39)], []);
+        Assert.Empty(SiteValidator.Validate(site));
+        CompiledLightField field = LightFieldCompiler.Compile(site, EnclosureBuilder.Build(site));
+
+        Vector3 sun = Direction.FromAzimuthZenith(Angle.FromDegrees(sunAzimuthDeg), Angle.FromDegrees(sunZenithDeg));
+        var outside = new OutsideLight(Instant.FromUtc(2026, 12, 21, 11, 0), sun, Dni, 0, Dni * sun.Z);
+        var light = new PointLight[field.Points.Length];
+        field.Step(outside, new LocalTime(12, 0), light);
+        int index = field.PointsOfBench(site.Benches.IndexOf(site.Benches.Single(b => b.Id == bench))).Start;
+
+        double z = sunZenithDeg * Math.PI / 180;
+        Vector3 normal = bench switch
+        {
+            "front" => new Vector3(0, -1, 0),
+            "west" => new Vector3(-1, 0, 0),
+            _ => new Vector3(0, 1, 0),
+        };
+        double cosIncidence = Vector3.Dot(sun, normal);
+        Assert.True(cosIncidence > 0, "the sun must be on the outer side of the wall");
+        double incidenceDeg = Math.Acos(cosIncidence) * 180 / Math.PI;
+        double tau = bench switch
+        {
+            "front" => DuffieBeckmanTau(incidenceDeg, 1.586, 10, 0.001, layers),
+            "west" => DuffieBeckmanTau(incidenceDeg, N, K, L, layers),
+            _ => 0,
+        };
+        if (sunAzimuthDeg == 200)
+        {
+            Assert.Equal(27.99, incidenceDeg, 2);
+        }
+
+        Assert.Equal(Dni * tau * (1 - Shading) * Math.Cos(z), light[index].HorizontalPpfd, 9);
+        Assert.Equal(0, (light[index].LightVector - (Dni * tau * (1 - Shading) * sun)).Length, 9);
+    }
 }
