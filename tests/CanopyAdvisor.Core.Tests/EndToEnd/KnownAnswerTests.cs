@@ -217,4 +217,48 @@ public sealed class KnownAnswerTests
         Assert.Equal(Dni * tau * (1 - Shading) * Math.Cos(z), light[index].HorizontalPpfd, 9);
         Assert.Equal(0, (light[index].LightVector - (Dni * tau * (1 - Shading) * sun)).Length, 9);
     }
+    // A clear midsummer day at 52° N through the real ClearSkyOutsideLight and LightSimulation, in the middle of a
+    // 200 m × 200 m house with a flat glass roof: each 15-minute step's outside light (taken from the same source at the
+    // step's midpoint) is carried through the roof by hand, beam DNI · τ(θ = z) · (1 − shading) · cos z plus diffuse
+    // DHI · τ_d · (1 − shading) (Duffie & Beckman ch. 5; MODEL.md §3), and summed into DLI = Σ PPFD · Δt / 10⁶ (MODEL.md §0).
+    // Tolerance 0.5 %: the sky quadrature's documented accuracy for a smooth weight (it touches only the diffuse part),
+    // plus the walls, which take the place of the roof only below 1.7° elevation.
+    [Fact]
+    public void Clear_day_under_a_flat_glass_roof_integrates_to_the_hand_computed_dli()
+    {
+        const double Shading = 0.12;
+        var house = new Glasshouse(
+            new Footprint(-100, -100, Angle.Zero, 200, 200), 1, 200, 4, Angle.Zero,
+            Glass, Glass, Glass, Glass, Glass, Shading);
+        Site site = MakeSite(house, [OnePoint("middle", 0, 0)], []);
+        CompiledLightField field = LightFieldCompiler.Compile(site, EnclosureBuilder.Build(site));
+        var source = new ClearSkyOutsideLight(site.Location, site.Zone, site.Weather);
+        var date = new LocalDate(2026, 6, 21);
+        BenchDayLight day = LightSimulation.Run(field, source, date, date).Days.Single();
+
+        const int Intervals = 4000;
+        double h = Math.PI / 2 / Intervals, tauD = 0;
+        for (int i = 0; i < Intervals; i++)
+        {
+            double theta = (i + 0.5) * h;
+            tauD += 2 * DuffieBeckmanTau(theta * 180 / Math.PI, N, K, L, 1) * Math.Cos(theta) * Math.Sin(theta) * h;
+        }
+
+        Instant start = Amsterdam.AtStartOfDay(date).ToInstant();
+        double sum = 0, beamSum = 0;
+        for (int step = 0; step < 96; step++)
+        {
+            OutsideLight o = source.At(start + Duration.FromMinutes((15 * step) + 7.5));
+            double cosZ = o.SunDirection.Normalized().Z;
+            double beam = cosZ > 0 && o.DirectNormalPpfd > 0
+                ? o.DirectNormalPpfd * DuffieBeckmanTau(Math.Acos(cosZ) * 180 / Math.PI, N, K, L, 1) * (1 - Shading) * cosZ
+                : 0;
+            beamSum += beam * 900;
+            sum += (beam + (o.DiffuseHorizontalPpfd * tauD * (1 - Shading))) * 900;
+        }
+
+        double expectedDli = sum / 1e6;
+        Assert.True(beamSum > 0.5 * sum, "a clear summer day is mostly beam light");
+        Assert.InRange(day.Dli, expectedDli * 0.995, expectedDli * 1.005);
+    }
 }
