@@ -14,7 +14,7 @@ namespace CanopyAdvisor.Core.Tests.EndToEnd;
 public sealed class KnownAnswerTests
 {
     private static readonly DateTimeZone Amsterdam = DateTimeZoneProviders.Tzdb["Europe/Amsterdam"];
-    private static readonly GeoLocation Naaldwijk = new(Angle.FromDegrees(52.0), Angle.FromDegrees(4.2), 0);
+    private static readonly GeoLocation Location52North = new(Angle.FromDegrees(52.0), Angle.FromDegrees(4.2), 0);
     private static readonly BandFractions White = new(0.2, 0.4, 0.4, 0.05);
 
     // Float glass 4 mm: n = 1.526, K = 4 m⁻¹ (Duffie & Beckman ch. 5 typical values).
@@ -22,7 +22,7 @@ public sealed class KnownAnswerTests
     private static readonly Cover Glass = new("float glass 4 mm", false, N, K, L, 1);
 
     private static Site MakeSite(Structure structure, Bench[] benches, Lamp[] lamps) =>
-        new("known-answer", "Known-answer test site (invented test data)", Naaldwijk, Amsterdam, structure,
+        new("known-answer", "Known-answer test site (invented test data)", Location52North, Amsterdam, structure,
             [.. benches], [.. lamps], ImmutableArray<Obstruction>.Empty, new WeatherSettings(3, 1));
 
     /// <summary>A one-point bench whose single sample point is at (x, y, 1.0 m): a 1 m × 1 m bench top at 0.8 m with a 0.2 m canopy of LAD 0.</summary>
