@@ -190,11 +190,13 @@ public sealed class MeasuredTemperature : ITemperatureSource
         foreach ((Instant a, Instant b) in intervals)
         {
             total += (b - a).TotalSeconds;
-            for (int i = 1; i < _times.Length; i++)
+            int first = Array.BinarySearch(_times, a);
+            first = Math.Max(1, first >= 0 ? first + 1 : ~first);
+            for (int i = first; i < _times.Length && _times[i - 1] < b; i++)
             {
                 Instant t0 = _times[i - 1];
                 Instant t1 = _times[i];
-                if (t1 <= a || t0 >= b || t1 - t0 > MaximumGap)
+                if (t1 <= a || t1 - t0 > MaximumGap)
                 {
                     continue;
                 }

@@ -1,5 +1,6 @@
 using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Validation;
+using CsCheck;
 
 namespace CanopyAdvisor.Core.Tests.Plants.Growth;
 
@@ -78,5 +79,20 @@ public class CardinalTemperatureResponseTests
             ex.Errors.Select(e => e.ToString()));
         var ex2 = Assert.Throws<InvalidInputException>(() => CardinalTemperatureResponse.Relative(double.NaN, 5, 25, double.PositiveInfinity));
         Assert.Equal(["temperatureC", "maximumTemperatureC"], ex2.Errors.Select(e => e.Path));
+    }
+
+    [Fact]
+    public void StaysInUnitInterval_AndPeaksAtTheOptimum()
+    {
+        // Yan & Hunt (1999): 0 ≤ r ≤ 1 with r = 1 only at Topt, for any Tmin < Topt < Tmax.
+        Gen.Select(Gen.Double[-5, 15], Gen.Double[1, 20], Gen.Double[1, 20], Gen.Double[0, 1])
+            .Sample((tMin, up, down, u) =>
+            {
+                double tOpt = tMin + up;
+                double tMax = tOpt + down;
+                double t = tMin - 5 + (u * (tMax - tMin + 10));
+                double r = CardinalTemperatureResponse.Relative(t, tMin, tOpt, tMax);
+                return r >= 0 && r <= 1 + 1e-12 && Math.Abs(CardinalTemperatureResponse.Relative(tOpt, tMin, tOpt, tMax) - 1) < 1e-12;
+            });
     }
 }
