@@ -13,9 +13,11 @@ namespace CanopyAdvisor.Core.Plants.Growth;
 /// ζ = N660/N730 = R:FR matters. The σ values are relative, rounded from memory after Mancinelli (1994)
 /// (<see cref="ModelConstants.PhytochromeSigmaRedAt660"/> and its three siblings) and not verified against his table.</para>
 /// <para>This is exact only for a two-line spectrum. For broadband light it is an approximation: at the R:FR of direct
-/// sunlight (1.14) it gives about 0.68, whereas Sager et al. (1988, Trans. ASAE 31:1882) computed ≈ 0.6–0.7 for daylight
-/// from the full spectrum (the design's 0.6 is quoted from memory). Shade-avoidance factors therefore use this function
-/// both for the lot and for the full-sun reference, so the bias cancels to first order.</para>
+/// sunlight (1.14) it gives 0.677. For comparison, Mancinelli's full spectral data applied to a reference sunlight
+/// spectrum (R:FR 1.267) give 0.683, and the same data for two lines at that R:FR give 0.705 (R for Photobiology,
+/// photobiologyPlants user guide); the design's "≈ 0.6 in full sun" (Sager et al. 1988, Trans. ASAE 31:1882) is
+/// quoted from memory and sits about 0.08 lower. Shade-avoidance factors use this function both for the lot and for
+/// the full-sun reference (<see cref="FullSun"/>), so a common bias cancels to first order.</para>
 /// </remarks>
 public static class PhytochromeState
 {

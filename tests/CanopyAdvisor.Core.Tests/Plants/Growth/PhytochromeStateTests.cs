@@ -35,6 +35,14 @@ public class PhytochromeStateTests
     }
 
     [Fact]
+    public void IsNearTheFullSpectrumDaylightValue()
+    {
+        // Mancinelli (1994) full spectral data over a reference sunlight spectrum with R:FR 1.266704 give PSS 0.68341
+        // (R for Photobiology, photobiologyPlants user guide, Pfr_Ptot(sun.spct)). Two-window at that R:FR: 0.6933; tolerance 0.015.
+        Assert.Equal(0.68341, PhytochromeState.FromRedToFarRed(1.266704), 0.015);
+    }
+
+    [Fact]
     public void Limits()
     {
         // Pure red: PSS → ~0.89 (from memory; Mancinelli 1994 gives about 0.87–0.89 in the red). Ours: 1/1.13 = 0.88496.
