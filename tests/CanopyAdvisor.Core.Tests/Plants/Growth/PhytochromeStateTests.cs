@@ -20,7 +20,8 @@ public class PhytochromeStateTests
     [Fact]
     public void FullSun_IsNearSagersDaylightValue()
     {
-        // Sager et al. (1988, Trans ASAE 31:1882): PSS ≈ 0.6 in full sun (value as quoted in MODEL.md, from memory).
+        // PSS ≈ 0.6 in full sun: MODEL.md after Sager et al. (1988, Trans ASAE 31:1882); the same figure is the textbook value
+        // of Salisbury & Ross (1992) as quoted in secondary sources (not checked at the source).
         // A two-window estimate is not a full-spectrum one, so the tolerance is wide: ±0.1. Ours: 0.677.
         Assert.InRange(PhytochromeState.FullSun, 0.5, 0.7);
         Assert.Equal(PhytochromeState.FromRedToFarRed(1.14), PhytochromeState.FullSun);
@@ -45,7 +46,7 @@ public class PhytochromeStateTests
     [Fact]
     public void Limits()
     {
-        // Pure red: PSS → ~0.89 (from memory; Mancinelli 1994 gives about 0.87–0.89 in the red). Ours: 1/1.13 = 0.88496.
+        // Pure red: PSS → ~0.89 for a red-rich source (Sager & McFarlane 1997, as quoted in secondary sources; from memory). Ours: 1/1.13 = 0.88496.
         Assert.Equal(0.89, PhytochromeState.PureRed, 0.01);
         Assert.Equal(PhytochromeState.PureRed, PhytochromeState.FromRedToFarRed(double.PositiveInfinity), 12);
         Assert.Equal(PhytochromeState.PureRed, PhytochromeState.FromRedToFarRed(1e9), 6);
