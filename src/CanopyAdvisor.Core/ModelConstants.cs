@@ -99,4 +99,45 @@ public static class ModelConstants
 
     /// <summary>Width of each R:FR window, 10 nm (655–665 nm and 725–735 nm; Smith 1982 definition of R:FR).</summary>
     public const double RedToFarRedWindowNm = 10.0;
+
+    /// <summary>
+    /// Relative photoconversion cross-section of Pr at 660 nm, 1.00 (normalising value; the four phytochrome
+    /// cross-sections are ratios rounded from memory after Mancinelli 1994, in Kendrick &amp; Kronenberg, Photomorphogenesis
+    /// in Plants, 2nd ed., pp. 211–269; not verified against the table).
+    /// </summary>
+    public const double PhytochromeSigmaRedAt660 = 1.00;
+
+    /// <summary>Relative photoconversion cross-section of Pfr at 660 nm, 0.13 (from memory after Mancinelli 1994; gives PSS 0.885 under pure 660 nm).</summary>
+    public const double PhytochromeSigmaFarRedAt660 = 0.13;
+
+    /// <summary>Relative photoconversion cross-section of Pr at 730 nm, 0.01 (from memory after Mancinelli 1994).</summary>
+    public const double PhytochromeSigmaRedAt730 = 0.01;
+
+    /// <summary>Relative photoconversion cross-section of Pfr at 730 nm, 0.40 (from memory after Mancinelli 1994; gives PSS 0.024 under pure 730 nm).</summary>
+    public const double PhytochromeSigmaFarRedAt730 = 0.40;
+
+    /// <summary>
+    /// Smallest DIF elongation factor, 0.2: the linear DIF response 1 + s·DIF is clamped here so that a large negative DIF
+    /// slows but never stops or reverses elongation (a choice of this project; Erwin, Heins &amp; Karlsson 1989 measured
+    /// DIF only over about −12…+12 K).
+    /// </summary>
+    public const double DifFactorFloor = 0.2;
+
+    /// <summary>
+    /// PSS below which shade avoidance counts as a leggy cause, 0.55 (a choice of this project: about 0.13 below the
+    /// two-window PSS of direct sunlight, where canopy shade begins; see PhytochromeState).
+    /// </summary>
+    public const double LegginessPhytochromeStateLimit = 0.55;
+
+    /// <summary>DIF above which positive DIF counts as a leggy cause, +2 K (a choice of this project; common practice aims at DIF ≤ 0 for height control).</summary>
+    public const double LegginessDifLimitKelvin = 2.0;
+
+    /// <summary>
+    /// Lowest accepted air temperature from files and setpoints, −40 °C (a choice of this project: wider than any crop's
+    /// cardinal range, narrow enough to catch unit mix-ups such as °F or K and sensor faults).
+    /// </summary>
+    public const double AirTemperatureMinimumC = -40.0;
+
+    /// <summary>Highest accepted air temperature from files and setpoints, 60 °C (a choice of this project; see <see cref="AirTemperatureMinimumC"/>).</summary>
+    public const double AirTemperatureMaximumC = 60.0;
 }
