@@ -9,8 +9,8 @@ namespace CanopyAdvisor.Core.Plants;
 /// <remarks>
 /// Error paths use the crop-file names: <c>balanceNumber.value</c>, <c>balanceNumber.range</c>,
 /// <c>balanceNumber.unit</c>, <c>balanceNumber.source</c>, <c>id</c>, <c>name</c>, <c>group</c>, <c>base</c>.
-/// Ranges are checked against the other parameters' values so that a crop with any one parameter moved to either
-/// end of its range (<see cref="CropConversions.WithParameterAtMinimum"/>) is still valid.
+/// Ranges of ordered parameters must not overlap, so that a crop with any one parameter moved to either end of its
+/// range (<see cref="CropConversions.WithParameterAtMinimum"/>) is still valid.
 /// </remarks>
 public static partial class CropValidator
 {
@@ -186,7 +186,8 @@ public static partial class CropValidator
     }
 
     /// <summary>The rules that tie parameters together: base &lt; optimum &lt; maximum temperature and
-    /// dliMinimum ≤ dliTarget, for the values and for every end of their ranges against the other's value.</summary>
+    /// dliMinimum ≤ dliTarget, for the values and for the ranges (which must not overlap, so that moving any one
+    /// parameter to an end of its range keeps the rule).</summary>
     /// <param name="crop">The crop.</param>
     /// <returns>The problems, empty when consistent.</returns>
     public static IReadOnlyList<ValidationError> ValidateCrossField(Crop crop)
@@ -218,14 +219,10 @@ public static partial class CropValidator
             return;
         }
 
-        if (!Ok(low.Maximum, high.Value))
+        // Ranges that do not overlap keep the rule for every single-parameter extreme (the uncertainty band).
+        if (!Ok(low.Maximum, high.Minimum))
         {
-            errors.Add(new ValidationError($"{lowKey}.range", $"maximum {Format(low.Maximum)} must be {relation} {highKey} ({Format(high.Value)}), so every value in the range keeps {lowKey} {relation} {highKey}"));
-        }
-
-        if (!Ok(low.Value, high.Minimum))
-        {
-            errors.Add(new ValidationError($"{highKey}.range", $"minimum {Format(high.Minimum)} must be {(strict ? "above" : "at least")} {lowKey} ({Format(low.Value)}), so every value in the range keeps {lowKey} {relation} {highKey}"));
+            errors.Add(new ValidationError($"{lowKey}.range", $"maximum {Format(low.Maximum)} must be {relation} the minimum of {highKey}.range ({Format(high.Minimum)}), so that any value of either range keeps {lowKey} {relation} {highKey}"));
         }
     }
 
