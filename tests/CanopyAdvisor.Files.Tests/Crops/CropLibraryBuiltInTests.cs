@@ -160,6 +160,29 @@ public class CropLibraryBuiltInTests
     }
 
     [Fact]
+    public void The_schema_readme_lists_every_key_with_its_unit()
+    {
+        // crops/README.md is the schema's documentation; it must agree with the validator's unit table.
+        string? folder = AppContext.BaseDirectory;
+        while (folder is not null && !File.Exists(Path.Combine(folder, "crops", "README.md")))
+        {
+            folder = Path.GetDirectoryName(folder);
+        }
+
+        Assert.NotNull(folder);
+        string readme = File.ReadAllText(Path.Combine(folder, "crops", "README.md"));
+        foreach (string key in CropConversions.ParameterKeys)
+        {
+            Assert.Contains($"| `{key}` | `{CropValidator.ExpectedUnit(key)}` |", readme, StringComparison.Ordinal);
+        }
+
+        foreach (string id in CropLibrary.BuiltInIds)
+        {
+            Assert.Contains($"| `{id}` |", readme, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
     public void Unknown_id_gives_a_hint()
     {
         Assert.False(Library.TryGet("petnia", out _));
