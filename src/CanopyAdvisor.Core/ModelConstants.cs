@@ -22,6 +22,9 @@ public static class ModelConstants
     /// <summary>R:FR of direct sunlight, 1.14 (Smith 1982 definition; common practice quote for direct sun).</summary>
     public const double SunlightRedToFarRed = 1.14;
 
+    /// <summary>Millimetres per metre.</summary>
+    public const double MillimetresPerMetre = 1000.0;
+
     /// <summary>Seconds per hour.</summary>
     public const double SecondsPerHour = 3600.0;
 

@@ -7,7 +7,7 @@ namespace CanopyAdvisor.Core.Plants;
 /// ratio is a power law of the blue flux magnitude I (µmol m⁻² s⁻¹): M(I) = <see cref="PhotoCoefficient"/> ·
 /// I^<see cref="PhotoExponent"/>.
 /// </remarks>
-/// <param name="Id">File name without extension, e.g. <c>petunia</c>; a variant's id is <c>base/variant</c>.</param>
+/// <param name="Id">File name without extension, e.g. <c>petunia</c>, or <c>petunia-compact</c> for a variant of it.</param>
 /// <param name="Name">Display name.</param>
 /// <param name="Group">Trade group.</param>
 /// <param name="BaseId">The crop a variant overrides, or null for a base crop.</param>

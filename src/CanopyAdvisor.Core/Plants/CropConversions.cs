@@ -8,7 +8,6 @@ namespace CanopyAdvisor.Core.Plants;
 public static class CropConversions
 {
     // A unit definition (SI), not a model constant.
-    private const double MillimetresPerMetre = 1000.0;
 
     private static readonly (string Key, Func<Crop, CropParameter> Get, Func<Crop, CropParameter, Crop> Set)[] Accessors =
     [
@@ -51,7 +50,7 @@ public static class CropConversions
             crop.ProprioceptiveSensitivity.Value,
             crop.PhotoCoefficient.Value,
             crop.PhotoExponent.Value,
-            crop.GrowthZoneLengthMm.Value / MillimetresPerMetre,
+            crop.GrowthZoneLengthMm.Value / ModelConstants.MillimetresPerMetre,
             Duration.FromHours(crop.NutationPeriodHours.Value),
             Angle.FromDegrees(crop.NutationAmplitudeDeg.Value),
             crop.NutationSense.Value < 0 ? -1 : 1,

@@ -6,7 +6,7 @@ namespace CanopyAdvisor.Core.Sites;
 /// <summary>The plants of one crop on a bench: when they were planted and are sold, how tall, how spaced, how many pots.</summary>
 /// <param name="Id">Identifier, unique within the site.</param>
 /// <param name="BenchId">The bench the lot stands on.</param>
-/// <param name="CropId">The crop (or variant, <c>base/variant</c>) in the crop library.</param>
+/// <param name="CropId">The crop or variant id in the crop library (its file name, e.g. <c>petunia-compact</c>).</param>
 /// <param name="PlantedOn">Local date of planting (potting or sowing).</param>
 /// <param name="SaleOn">Local date the lot is sold (after <paramref name="PlantedOn"/>).</param>
 /// <param name="HeightMm">Plant height measured now (at the forecast start), mm.</param>

@@ -487,7 +487,7 @@ public static class SiteValidator
 
         if (string.IsNullOrEmpty(lot.CropId) || !lot.CropId.All(c => c is (>= 'a' and <= 'z') or (>= '0' and <= '9') or '-' or '/'))
         {
-            errors.Add(new($"{path}.crop", $"must be a crop id of lower-case letters, digits, '-' and '/' (e.g. \"petunia/compact\"), got '{lot.CropId}'"));
+            errors.Add(new($"{path}.crop", $"must be a crop id of lower-case letters, digits, '-' and '/' (e.g. \"petunia-compact\"), got '{lot.CropId}'"));
         }
 
         Bench? bench = benches.FirstOrDefault(b => string.Equals(b.Id, lot.BenchId, StringComparison.Ordinal));

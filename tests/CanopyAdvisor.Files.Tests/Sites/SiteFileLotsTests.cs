@@ -22,7 +22,7 @@ public class SiteFileLotsTests
         Lot lot = Assert.Single(site.Lots);
         Assert.Equal("lot-1", lot.Id);
         Assert.Equal("b1", lot.BenchId);
-        Assert.Equal("petunia/compact", lot.CropId);
+        Assert.Equal("petunia-compact", lot.CropId);
         Assert.Equal(new LocalDate(2026, 11, 20), lot.PlantedOn);
         Assert.Equal(new LocalDate(2027, 1, 15), lot.SaleOn);
         Assert.Equal(new LocalDate(2026, 12, 1), lot.MeasuredOn);

@@ -54,7 +54,7 @@ internal static partial class SiteJson
           ],
           "temperatures": { "dayC": 20, "nightC": 17, "preDawnDropC": 3, "preDawnDropHours": 2 },
           "lots": [
-            { "id": "lot-1", "benchId": "b1", "crop": "petunia/compact", "plantedOn": "2026-11-20", "saleOn": "2027-01-15",
+            { "id": "lot-1", "benchId": "b1", "crop": "petunia-compact", "plantedOn": "2026-11-20", "saleOn": "2027-01-15",
               "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 800,
               "rotations": [ { "at": "2026-11-28T08:00:00+01:00", "angleDeg": 180 } ] }
           ]

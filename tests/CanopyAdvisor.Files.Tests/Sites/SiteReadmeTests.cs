@@ -32,7 +32,7 @@ public class SiteReadmeTests
         EvaluationResults result = JsonSchema.FromText(SiteSchema.ReadText()).Evaluate(JsonNode.Parse(json));
 
         Assert.Equal(4, site.Lamps.Length);
-        Assert.Equal("petunia/compact", Assert.Single(site.Lots).CropId);
+        Assert.Equal("petunia-compact", Assert.Single(site.Lots).CropId);
         Assert.Equal(new TemperatureSetpoints(20, 17, 3, 2), site.Temperatures);
         Assert.True(result.IsValid);
     }

@@ -53,9 +53,8 @@ public static class ElongationModel
     /// <summary>The elongation rate, m h⁻¹ (the unit of the stem model).</summary>
     /// <exception cref="InvalidInputException">A crop parameter or a condition is invalid.</exception>
     public static double RateMetresPerHour(Crop crop, ElongationConditions conditions) =>
-        RateMmPerDay(crop, conditions) / MillimetresPerMetre / HoursPerDay;
+        RateMmPerDay(crop, conditions) / ModelConstants.MillimetresPerMetre / HoursPerDay;
 
-    private const double MillimetresPerMetre = 1000.0;
 
     private const double HoursPerDay = ModelConstants.SecondsPerDay / ModelConstants.SecondsPerHour;
 }
