@@ -39,7 +39,10 @@ namespace CanopyAdvisor.Core.Plants;
 /// σ·2π/P (σ = +1 counter-clockwise seen from above). D = (α/L_gz)·√((ε̇γ)² + ω²), which is the drive that makes
 /// the curvature of a straight, upright growth zone with only proprioception acting (no gravity, no light) settle to
 /// a rotating uniform curvature α/L_gz, that is an apex tilt oscillating with amplitude α. Gravitropism reduces it.
-/// Circumnutation is differential growth: it stops, like all bending, when Ė = 0.
+/// Circumnutation is differential growth: it stops, like all bending, when Ė = 0, and its phase advances only while the
+/// stem grows, so a pause in growth leaves the curvature in step with the drive when growth resumes. At the first
+/// growing step the growth zone is put into the drive's periodic state (see <c>StartNutation</c>), so no start-up
+/// transient is frozen into the stem.
 /// </para>
 /// <para>
 /// Lengthening: length Ė·dt is added at the apex; it grows straight along the apex tangent until a whole ds has
@@ -92,6 +95,7 @@ public sealed class Stem
     private int _historyCount;
     private int _historyNewest = -1;
     private int _polylineCount;
+    private bool _nutating;
 
     private Stem(StemParameters parameters, double lengthM, Vector3 direction, int growthZoneSegments)
     {
@@ -299,10 +303,7 @@ public sealed class Stem
 
             Walk(bend: true, h, epsDot, lightDir, nu);
         }
-        else
-        {
-            AdvancePhase(h);
-        }
+
 
         _timeH += h;
         if (lengthen && elongation > 0)
@@ -353,6 +354,11 @@ public sealed class Stem
                 double cIm = ((numIm * lambda) - (numRe * _omega)) / den;
                 nutU = drive * ((_phaseCos * cRe) - (_phaseSin * cIm));
                 nutV = drive * ((_phaseCos * cIm) + (_phaseSin * cRe));
+                if (!_nutating)
+                {
+                    StartNutation(drive, lambda);
+                }
+
                 AdvancePhase(h);
             }
 
@@ -475,6 +481,25 @@ public sealed class Stem
         (double sin, cos) = Math.SinCos(x);
         sinc = sin / x;
         oneMinusCosOverX2 = (1 - cos) / (x * x);
+    }
+
+    /// <summary>
+    /// Puts the growth zone into the periodic state of the nutation drive alone, D e^{iφ}/(λ + iω) added to every
+    /// segment (magnitude α/L_gz), as if the stem had been circumnutating before it was created. Starting from rest
+    /// instead would leave a non-rotating transient decaying over 1/(ε̇γ) (often days), which the maturing segments
+    /// would freeze into a spurious permanent lean.
+    /// </summary>
+    private void StartNutation(double drive, double lambda)
+    {
+        _nutating = true;
+        double den = (lambda * lambda) + (_omega * _omega);
+        double re = drive * ((_phaseCos * lambda) + (_phaseSin * _omega)) / den;
+        double im = drive * ((_phaseSin * lambda) - (_phaseCos * _omega)) / den;
+        for (int i = 0; i < _n; i++)
+        {
+            _ku[i] += re;
+            _kv[i] += im;
+        }
     }
 
     private void SetRotor(double h)
