@@ -72,6 +72,8 @@ public sealed class Stem
 
     private double[] _ku;
     private double[] _kv;
+    private double[] _hs; // sinc(θ/2) of each segment's curvature at the last transport
+    private double[] _omc; // (1 − cos(θ/2))/(θ/2)² likewise
     private Vector3[] _nodes; // growth-zone node positions, logical order, node 0 = growth-zone base
     private double[] _historyTimes;
     private double[] _history; // [(slot * n + storage) * 2 + 0/1]
@@ -96,6 +98,12 @@ public sealed class Stem
     private int _historyNewest = -1;
     private int _polylineCount;
     private bool _nutating;
+    private double _lastLambda = double.NaN;
+    private double _lastH = double.NaN;
+    private double _lastDecay;
+    private double _lastGain;
+    private double _lastIntensity = double.NaN;
+    private double _lastRatio;
 
     private Stem(StemParameters parameters, double lengthM, Vector3 direction, int growthZoneSegments)
     {
@@ -115,6 +123,10 @@ public sealed class Stem
 
         _ku = new double[_n];
         _kv = new double[_n];
+        _hs = new double[_n];
+        _omc = new double[_n];
+        Array.Fill(_hs, 1.0);
+        Array.Fill(_omc, 0.5);
         _nodes = new Vector3[_n + 1];
         _historyTimes = new double[HistoryCapacity];
         _history = new double[HistoryCapacity * _n * 2];
@@ -268,6 +280,8 @@ public sealed class Stem
         var copy = (Stem)MemberwiseClone();
         copy._ku = (double[])_ku.Clone();
         copy._kv = (double[])_kv.Clone();
+        copy._hs = (double[])_hs.Clone();
+        copy._omc = (double[])_omc.Clone();
         copy._nodes = (Vector3[])_nodes.Clone();
         copy._historyTimes = (double[])_historyTimes.Clone();
         copy._history = (double[])_history.Clone();
@@ -297,7 +311,13 @@ public sealed class Stem
             Vector3 lightDir = Vector3.Zero;
             if (intensity > 0)
             {
-                nu = _beta * _photoA * Math.Pow(intensity, _photoB);
+                if (intensity != _lastIntensity)
+                {
+                    _lastIntensity = intensity;
+                    _lastRatio = _photoB == 0 ? _photoA : _photoA * Math.Pow(intensity, _photoB);
+                }
+
+                nu = _beta * _lastRatio;
                 lightDir = blue / intensity;
             }
 
@@ -339,8 +359,17 @@ public sealed class Stem
         if (bend)
         {
             double lambda = epsDot * _gamma;
-            decay = Math.Exp(-lambda * h);
-            gain = lambda * h > 1e-9 ? (1 - decay) / lambda : h;
+            if (lambda != _lastLambda || h != _lastH)
+            {
+                // Steps usually repeat with the same ε̇ and dt: the exponential is worth keeping.
+                _lastLambda = lambda;
+                _lastH = h;
+                _lastDecay = Math.Exp(-lambda * h);
+                _lastGain = lambda * h > 1e-9 ? (1 - _lastDecay) / lambda : h;
+            }
+
+            decay = _lastDecay;
+            gain = _lastGain;
             cGravity = epsDot * _beta / _gz;
             cLight = epsDot * nu / _gz;
             if (_nutationAmplitude != 0 && h > 0)
@@ -368,78 +397,93 @@ public sealed class Stem
             }
         }
 
-        Vector3 t = _tb, u = _ub, v = _vb, p = _base;
-        double ds = _ds, halfDs = 0.5 * _ds;
-        _nodes[0] = p;
-        for (int i = 0; i < _n; i++)
+        // Scalars and local array references keep the loop in registers (this loop is the forecast's hot path).
+        double tx = _tb.X, ty = _tb.Y, tz = _tb.Z, ux = _ub.X, uy = _ub.Y, uz = _ub.Z, vx = _vb.X, vy = _vb.Y, vz = _vb.Z;
+        double px = _base.X, py = _base.Y, pz = _base.Z;
+        double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
+        double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, halfDsSq2 = 0.5 * ds * ds;
+        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, history = _history;
+        Vector3[] nodes = _nodes;
+        int n = _n, head = _head;
+        nodes[0] = _base;
+        for (int i = 0; i < n; i++)
         {
-            int s = _head + i;
-            if (s >= _n)
+            int s = head + i;
+            if (s >= n)
             {
-                s -= _n;
+                s -= n;
             }
 
-            double ku = _ku[s], kv = _kv[s];
+            double ku = kuArray[s], kv = kvArray[s];
             if (bend)
             {
-                // Stimuli at the segment's midpoint tangent: turn the start-frame components by θ/2 in the bending plane.
-                double km2 = (ku * ku) + (kv * kv);
-                double x = 0.5 * Math.Sqrt(km2) * ds;
-                HalfAngle(x, out _, out double hs, out double omc);
-                double gu = u.Z, gv = v.Z, lu = 0, lv = 0;
-                double sinOverKm = hs * halfDs; // sin(x)/|κ|
-                double cosMinusOneOverKm2 = -omc * halfDs * halfDs; // (cos x − 1)/|κ|²
-                if (km2 > 0)
-                {
-                    // g += adj·κ with adj·|κ| = (cos x − 1)(g·κ̂) − sin x (g·t̂), written without dividing by |κ|.
-                    double gk = (gu * ku) + (gv * kv); // (g·κ̂)|κ|
-                    double adj = (cosMinusOneOverKm2 * gk) - (sinOverKm * t.Z);
-                    gu += adj * ku;
-                    gv += adj * kv;
-                }
-
+                // Stimuli at the segment's midpoint tangent: turn the start-frame components by x = θ/2 in the bending
+                // plane, g += adj·κ with adj·|κ| = (cos x − 1)(g·κ̂) − sin x (g·t̂), without dividing by |κ|. The
+                // half-angle functions of the current κ were kept from the last transport.
+                double sinOverKm = hsArray[s] * halfDs; // sin(x)/|κ|
+                double cosMinusOneOverKm2 = -omcArray[s] * halfDs2; // (cos x − 1)/|κ|²
+                double gu = uz, gv = vz, lu = 0, lv = 0;
+                double adj = (cosMinusOneOverKm2 * ((gu * ku) + (gv * kv))) - (sinOverKm * tz);
+                gu += adj * ku;
+                gv += adj * kv;
                 if (cLight != 0)
                 {
-                    lu = Vector3.Dot(lightDir, u);
-                    lv = Vector3.Dot(lightDir, v);
-                    if (km2 > 0)
-                    {
-                        double lk = (lu * ku) + (lv * kv);
-                        double adj = (cosMinusOneOverKm2 * lk) - (sinOverKm * Vector3.Dot(lightDir, t));
-                        lu += adj * ku;
-                        lv += adj * kv;
-                    }
+                    lu = (lx * ux) + (ly * uy) + (lz * uz);
+                    lv = (lx * vx) + (ly * vy) + (lz * vz);
+                    double lt = (lx * tx) + (ly * ty) + (lz * tz);
+                    double adjLight = (cosMinusOneOverKm2 * ((lu * ku) + (lv * kv))) - (sinOverKm * lt);
+                    lu += adjLight * ku;
+                    lv += adjLight * kv;
                 }
 
                 if (read0 >= 0)
                 {
                     if (pushSlot >= 0)
                     {
-                        int w = ((pushSlot * _n) + s) * 2;
-                        _history[w] = gu;
-                        _history[w + 1] = gv;
+                        int w = ((pushSlot * n) + s) * 2;
+                        history[w] = gu;
+                        history[w + 1] = gv;
                     }
 
-                    int r0 = ((read0 * _n) + s) * 2, r1 = ((read1 * _n) + s) * 2;
-                    gu = _history[r0] + (readWeight * (_history[r1] - _history[r0]));
-                    gv = _history[r0 + 1] + (readWeight * (_history[r1 + 1] - _history[r0 + 1]));
+                    int r0 = ((read0 * n) + s) * 2, r1 = ((read1 * n) + s) * 2;
+                    gu = history[r0] + (readWeight * (history[r1] - history[r0]));
+                    gv = history[r0 + 1] + (readWeight * (history[r1 + 1] - history[r0 + 1]));
                 }
 
-                double fu = (cGravity * gu) + (cLight * lu);
-                double fv = (cGravity * gv) + (cLight * lv);
-                ku = (ku * decay) + (fu * gain) + nutU;
-                kv = (kv * decay) + (fv * gain) + nutV;
-                _ku[s] = ku;
-                _kv[s] = kv;
+                ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain) + nutU;
+                kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain) + nutV;
+                kuArray[s] = ku;
+                kvArray[s] = kv;
             }
 
             // Carry the frame through the arc: rotation by θ = |κ|ds about t̂ × κ̂, division-free (κ may be zero).
-            Transport(ref t, ref u, ref v, ref p, ku, kv, ds);
-            _nodes[i + 1] = p;
+            // With x = θ/2: sin θ/|κ| = ds·sinc(x)·cos x, (1 − cos θ)/|κ|² = ds²·sinc²(x)/2.
+            double km2 = (ku * ku) + (kv * kv);
+            HalfAngle(0.5 * Math.Sqrt(km2) * ds, out double ch, out double hs, out double omc);
+            hsArray[s] = hs;
+            omcArray[s] = omc;
+            double sinOverKmFull = ds * hs * ch;
+            double omc2 = halfDsSq2 * hs * hs;
+            double kx = (ku * ux) + (kv * vx), ky = (ku * uy) + (kv * vy), kz = (ku * uz) + (kv * vz);
+            px += (tx * sinOverKmFull) + (kx * omc2);
+            py += (ty * sinOverKmFull) + (ky * omc2);
+            pz += (tz * sinOverKmFull) + (kz * omc2);
+            double ct = 1 - (omc2 * km2);
+            double au = omc2 * ku, bu = sinOverKmFull * ku, av = omc2 * kv, bv = sinOverKmFull * kv;
+            ux -= (kx * au) + (tx * bu);
+            uy -= (ky * au) + (ty * bu);
+            uz -= (kz * au) + (tz * bu);
+            vx -= (kx * av) + (tx * bv);
+            vy -= (ky * av) + (ty * bv);
+            vz -= (kz * av) + (tz * bv);
+            tx = (tx * ct) + (kx * sinOverKmFull);
+            ty = (ty * ct) + (ky * sinOverKmFull);
+            tz = (tz * ct) + (kz * sinOverKmFull);
+            nodes[i + 1] = new Vector3(px, py, pz);
         }
 
-        _apexTangent = t;
-        _apex = p + (t * _extra);
+        _apexTangent = new Vector3(tx, ty, tz);
+        _apex = new Vector3(px + (tx * _extra), py + (ty * _extra), pz + (tz * _extra));
     }
 
     /// <summary>Carries position and frame (t̂, u, v) through one arc of length ds and curvature κ = ku·u + kv·v.</summary>
@@ -467,6 +511,7 @@ public sealed class Stem
     }
 
     /// <summary>cos x, sin(x)/x and (1 − cos x)/x²; Taylor series for |x| &lt; 0.6 (error below 1e-12), the library otherwise.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x < 0.6)
@@ -499,6 +544,7 @@ public sealed class Stem
         {
             _ku[i] += re;
             _kv[i] += im;
+            HalfAngle(0.5 * Math.Sqrt((_ku[i] * _ku[i]) + (_kv[i] * _kv[i])) * _ds, out _, out _hs[i], out _omc[i]);
         }
     }
 
@@ -586,6 +632,8 @@ public sealed class Stem
         _head = s + 1 == _n ? 0 : s + 1;
         _ku[s] = 0;
         _kv[s] = 0;
+        _hs[s] = 1;
+        _omc[s] = 0.5;
         if (_n > 1)
         {
             // The new apical segment (storage s) inherits the sensing history of the segment below it.
