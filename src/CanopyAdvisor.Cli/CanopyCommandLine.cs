@@ -19,6 +19,7 @@ internal static class CanopyCommandLine
             SunCommand.Create(output),
             LightCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             DemoCommand.Create(output),
+            CropsCommand.Create(output),
         };
 
         try
@@ -37,6 +38,11 @@ internal static class CanopyCommandLine
             return InvalidInputExitCode;
         }
         catch (IOException ex)
+        {
+            error.WriteLine($"error: {ex.Message}");
+            return InvalidInputExitCode;
+        }
+        catch (KeyNotFoundException ex)
         {
             error.WriteLine($"error: {ex.Message}");
             return InvalidInputExitCode;

@@ -46,16 +46,17 @@ internal sealed class TextTable
 
     private void AppendRow(StringBuilder sb, string[] cells, int[] widths)
     {
+        var line = new StringBuilder();
         for (int i = 0; i < cells.Length; i++)
         {
             if (i > 0)
             {
-                sb.Append("  ");
+                line.Append("  ");
             }
 
-            sb.Append(_rightAligned[i] ? cells[i].PadLeft(widths[i]) : cells[i].PadRight(widths[i]));
+            line.Append(_rightAligned[i] ? cells[i].PadLeft(widths[i]) : cells[i].PadRight(widths[i]));
         }
 
-        sb.Append('\n');
+        sb.Append(line.ToString().TrimEnd()).Append('\n');
     }
 }
