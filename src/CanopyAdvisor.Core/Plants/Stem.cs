@@ -36,18 +36,24 @@ namespace CanopyAdvisor.Core.Plants;
 /// </para>
 /// <para>
 /// Circumnutation: a curvature drive of constant magnitude D rotating about t̂ with angular speed
-/// σ·2π/P (σ = +1 counter-clockwise seen from above). D = (α/L_gz)·√((ε̇γ)² + ω²), which is the drive that makes
-/// the curvature of a straight, upright growth zone with only proprioception acting (no gravity, no light) settle to
-/// a rotating uniform curvature α/L_gz, that is an apex tilt oscillating with amplitude α. Gravitropism reduces it.
-/// Circumnutation is differential growth: it stops, like all bending, when Ė = 0, and its phase advances only while the
-/// stem grows, so a pause in growth leaves the curvature in step with the drive when growth resumes. At the first
-/// growing step the growth zone is put into the drive's periodic state (see <c>StartNutation</c>), so no start-up
-/// transient is frozen into the stem.
+/// ω = σ·2π/P (σ = +1 counter-clockwise seen from above), relaxed by proprioception like any curvature:
+/// dκ_n/dt = −ε̇γ κ_n + D e^{iωt}. The model is linear in κ, so this part is kept apart from the tropic curvature
+/// (one value, uniform over the growth zone, in the segments' own frames) and the growth zone is drawn and sensed with
+/// the sum. D = (α/L_gz)·√((ε̇γ)² + ω²) makes |κ_n| = α/L_gz in the periodic state, a uniform arc whose apex tangent
+/// tilts by α (an arc turns its tangent by κL): with nothing else acting the apex circles with tilt α (between
+/// α(1 − 1/N) and α while growing, because the maturing basal segment fades out of it). Gravitropism sensing that tilt
+/// (with its delay) adds to or reduces it. Circumnutation is differential growth: it stops, like all bending, when
+/// Ė = 0, and its phase advances only while the stem grows. At the first growing step κ_n starts in its periodic state
+/// (see <c>StartNutation</c>). Matured segments keep only the tropic curvature: the helix circumnutation leaves in
+/// real stems has a pitch of a few millimetres and a negligible radius, while freezing whole segments at one phase
+/// of it would build a false lean whenever the freeze interval is a multiple of the period.
 /// </para>
 /// <para>
 /// Lengthening: length Ė·dt is added at the apex; it grows straight along the apex tangent until a whole ds has
 /// been added, then the basal growth-zone segment matures (freezes) and a new straight segment starts at the apex,
-/// so the growth zone slides toward the apex and the geometry stays continuous.
+/// so the growth zone slides toward the apex and the geometry stays continuous. The basal segment is drawn, and
+/// frozen, with the growth-weighted mean of its curvature since it became basal (material passes out of the growth
+/// zone continuously), which keeps circumnutation from being locked into the matured stem as a false lean.
 /// </para>
 /// <para>Not thread-safe; deterministic; <see cref="Clone"/> is a deep copy. <see cref="Step"/> allocates nothing.</para>
 /// </remarks>
@@ -98,6 +104,11 @@ public sealed class Stem
     private int _historyNewest = -1;
     private int _polylineCount;
     private bool _nutating;
+    private double _nutationU; // the nutation's curvature, uniform over the growth zone, in the segments' own frames
+    private double _nutationV;
+    private double _basalSumU; // growth-weighted sums of the maturing basal segment's curvature
+    private double _basalSumV;
+    private double _basalWeight; // metres grown since it became basal
     private double _lastLambda = double.NaN;
     private double _lastH = double.NaN;
     private double _lastDecay;
@@ -141,7 +152,7 @@ public sealed class Stem
         _polylineCount = 2;
 
         // Record the initial stimulus as the whole past (h = 0 leaves the curvature unchanged).
-        Walk(bend: true, 0, 0, Vector3.Zero, 0);
+        Walk(bend: true, 0, 0, Vector3.Zero, 0, 0);
     }
 
     /// <summary>The parameters this stem was created with.</summary>
@@ -321,7 +332,7 @@ public sealed class Stem
                 lightDir = blue / intensity;
             }
 
-            Walk(bend: true, h, epsDot, lightDir, nu);
+            Walk(bend: true, h, epsDot, lightDir, nu, lengthen ? elongation * h : 0);
         }
 
 
@@ -338,7 +349,7 @@ public sealed class Stem
                 }
 
                 Orthonormalise();
-                Walk(bend: false, 0, 0, Vector3.Zero, 0);
+                Walk(bend: false, 0, 0, Vector3.Zero, 0, 0);
             }
             else
             {
@@ -351,9 +362,10 @@ public sealed class Stem
     /// One pass from the growth-zone base to the apex: senses, bends (when asked), carries the frame and sums the
     /// positions. Allocation-free; about 60 flops per segment.
     /// </summary>
-    private void Walk(bool bend, double h, double epsDot, Vector3 lightDir, double nu)
+    private void Walk(bool bend, double h, double epsDot, Vector3 lightDir, double nu, double grownM)
     {
         double decay = 1, gain = 0, nutU = 0, nutV = 0, cGravity = 0, cLight = 0;
+        double nutOldU = _nutationU, nutOldV = _nutationV;
         int pushSlot = -1, read0 = -1, read1 = -1;
         double readWeight = 0;
         if (bend)
@@ -388,6 +400,11 @@ public sealed class Stem
                     StartNutation(drive, lambda);
                 }
 
+                nutOldU = _nutationU;
+                nutOldV = _nutationV;
+                _nutationU = (_nutationU * decay) + nutU;
+                _nutationV = (_nutationV * decay) + nutV;
+
                 AdvancePhase(h);
             }
 
@@ -402,6 +419,8 @@ public sealed class Stem
         double px = _base.X, py = _base.Y, pz = _base.Z;
         double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
         double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, halfDsSq2 = 0.5 * ds * ds;
+        // The nutation bends the basal segment only over its part not yet matured, so it fades out continuously.
+        double basalNutationWeight = Math.Max(0, 1 - (_extra / _ds));
         double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, history = _history;
         Vector3[] nodes = _nodes;
         int n = _n, head = _head;
@@ -415,6 +434,20 @@ public sealed class Stem
             }
 
             double ku = kuArray[s], kv = kvArray[s];
+            double gku = ku, gkv = kv; // the tropic curvature drawn (differs from the state only in the maturing basal segment)
+            double nutWeight = 1;
+            if (i == 0)
+            {
+                nutWeight = basalNutationWeight;
+                if (_basalWeight > 0)
+                {
+                    gku = _basalSumU / _basalWeight;
+                    gkv = _basalSumV / _basalWeight;
+                }
+            }
+
+            double sku = gku + (nutWeight * nutOldU), skv = gkv + (nutWeight * nutOldV); // as sensed: with the nutation
+
             if (bend)
             {
                 // Stimuli at the segment's midpoint tangent: turn the start-frame components by x = θ/2 in the bending
@@ -423,17 +456,17 @@ public sealed class Stem
                 double sinOverKm = hsArray[s] * halfDs; // sin(x)/|κ|
                 double cosMinusOneOverKm2 = -omcArray[s] * halfDs2; // (cos x − 1)/|κ|²
                 double gu = uz, gv = vz, lu = 0, lv = 0;
-                double adj = (cosMinusOneOverKm2 * ((gu * ku) + (gv * kv))) - (sinOverKm * tz);
-                gu += adj * ku;
-                gv += adj * kv;
+                double adj = (cosMinusOneOverKm2 * ((gu * sku) + (gv * skv))) - (sinOverKm * tz);
+                gu += adj * sku;
+                gv += adj * skv;
                 if (cLight != 0)
                 {
                     lu = (lx * ux) + (ly * uy) + (lz * uz);
                     lv = (lx * vx) + (ly * vy) + (lz * vz);
                     double lt = (lx * tx) + (ly * ty) + (lz * tz);
-                    double adjLight = (cosMinusOneOverKm2 * ((lu * ku) + (lv * kv))) - (sinOverKm * lt);
-                    lu += adjLight * ku;
-                    lv += adjLight * kv;
+                    double adjLight = (cosMinusOneOverKm2 * ((lu * sku) + (lv * skv))) - (sinOverKm * lt);
+                    lu += adjLight * sku;
+                    lv += adjLight * skv;
                 }
 
                 if (read0 >= 0)
@@ -450,14 +483,38 @@ public sealed class Stem
                     gv = history[r0 + 1] + (readWeight * (history[r1 + 1] - history[r0 + 1]));
                 }
 
-                ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain) + nutU;
-                kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain) + nutV;
+                ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain);
+                kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain);
                 kuArray[s] = ku;
                 kvArray[s] = kv;
+                if (i != 0)
+                {
+                    gku = ku;
+                    gkv = kv;
+                }
+                else if (grownM > 0)
+                {
+                    // The basal segment matures bit by bit as it is passed by growth: its drawn (and finally frozen)
+                    // curvature is the growth-weighted mean since it became basal. Freezing the instantaneous value
+                    // instead would lock one phase of the nutation into every matured segment, and when the freeze
+                    // interval is a multiple of the nutation period those kinks add up to a large false lean.
+                    _basalSumU += ku * grownM;
+                    _basalSumV += kv * grownM;
+                    _basalWeight += grownM;
+                    gku = _basalSumU / _basalWeight;
+                    gkv = _basalSumV / _basalWeight;
+                }
+                else if (_basalWeight == 0)
+                {
+                    gku = ku;
+                    gkv = kv;
+                }
             }
 
             // Carry the frame through the arc: rotation by θ = |κ|ds about t̂ × κ̂, division-free (κ may be zero).
             // With x = θ/2: sin θ/|κ| = ds·sinc(x)·cos x, (1 − cos θ)/|κ|² = ds²·sinc²(x)/2.
+            ku = gku + (nutWeight * _nutationU);
+            kv = gkv + (nutWeight * _nutationV);
             double km2 = (ku * ku) + (kv * kv);
             HalfAngle(0.5 * Math.Sqrt(km2) * ds, out double ch, out double hs, out double omc);
             hsArray[s] = hs;
@@ -529,8 +586,7 @@ public sealed class Stem
     }
 
     /// <summary>
-    /// Puts the growth zone into the periodic state of the nutation drive alone, D e^{iφ}/(λ + iω) added to every
-    /// segment (magnitude α/L_gz), as if the stem had been circumnutating before it was created. Starting from rest
+    /// Puts the nutation curvature into the periodic state of its drive, D e^{iφ}/(λ + iω) (magnitude α/L_gz), as if the stem had been circumnutating before it was created. Starting from rest
     /// instead would leave a non-rotating transient decaying over 1/(ε̇γ) (often days), which the maturing segments
     /// would freeze into a spurious permanent lean.
     /// </summary>
@@ -538,14 +594,8 @@ public sealed class Stem
     {
         _nutating = true;
         double den = (lambda * lambda) + (_omega * _omega);
-        double re = drive * ((_phaseCos * lambda) + (_phaseSin * _omega)) / den;
-        double im = drive * ((_phaseSin * lambda) - (_phaseCos * _omega)) / den;
-        for (int i = 0; i < _n; i++)
-        {
-            _ku[i] += re;
-            _kv[i] += im;
-            HalfAngle(0.5 * Math.Sqrt((_ku[i] * _ku[i]) + (_kv[i] * _kv[i])) * _ds, out _, out _hs[i], out _omc[i]);
-        }
+        _nutationU = drive * ((_phaseCos * lambda) + (_phaseSin * _omega)) / den;
+        _nutationV = drive * ((_phaseSin * lambda) - (_phaseCos * _omega)) / den;
     }
 
     private void SetRotor(double h)
@@ -621,7 +671,10 @@ public sealed class Stem
     {
         int s = _head;
         Vector3 t = _tb, u = _ub, v = _vb, p = _base;
-        Transport(ref t, ref u, ref v, ref p, _ku[s], _kv[s], _ds);
+        double ku = _basalWeight > 0 ? _basalSumU / _basalWeight : _ku[s];
+        double kv = _basalWeight > 0 ? _basalSumV / _basalWeight : _kv[s];
+        _basalSumU = _basalSumV = _basalWeight = 0;
+        Transport(ref t, ref u, ref v, ref p, ku, kv, _ds);
         _tb = t;
         _ub = u;
         _vb = v;
