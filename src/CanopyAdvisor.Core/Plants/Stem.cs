@@ -335,7 +335,6 @@ public sealed class Stem
             Walk(bend: true, h, epsDot, lightDir, nu, lengthen ? elongation * h : 0);
         }
 
-
         _timeH += h;
         if (lengthen && elongation > 0)
         {
