@@ -573,9 +573,10 @@ public sealed class Stem
         if (x < 0.6)
         {
             double x2 = x * x;
-            oneMinusCosOverX2 = 0.5 * (1 - (x2 / 12 * (1 - (x2 / 30 * (1 - (x2 / 56 * (1 - (x2 / 90))))))));
+            // Multiplications by reciprocals, not divisions: this runs once per segment per step.
+            oneMinusCosOverX2 = 0.5 * (1 - (x2 * (1.0 / 12) * (1 - (x2 * (1.0 / 30) * (1 - (x2 * (1.0 / 56) * (1 - (x2 * (1.0 / 90)))))))));
             cos = 1 - (x2 * oneMinusCosOverX2);
-            sinc = 1 - (x2 / 6 * (1 - (x2 / 20 * (1 - (x2 / 42 * (1 - (x2 / 72 * (1 - (x2 / 110)))))))));
+            sinc = 1 - (x2 * (1.0 / 6) * (1 - (x2 * (1.0 / 20) * (1 - (x2 * (1.0 / 42) * (1 - (x2 * (1.0 / 72) * (1 - (x2 * (1.0 / 110))))))))));
             return;
         }
 
