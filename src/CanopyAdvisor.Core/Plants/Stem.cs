@@ -80,6 +80,10 @@ public sealed class Stem
     private double[] _kv;
     private double[] _hs; // sinc(θ/2) of each segment's curvature at the last transport
     private double[] _omc; // (1 − cos(θ/2))/(θ/2)² likewise
+    private double[] _ch; // cos(θ/2) likewise
+    private double[] _drawnU; // the curvature each segment was drawn with at the last walk (tropic + nutation)
+    private double[] _drawnV;
+    private double[] _frames; // each segment's start frame (t̂, u, v) at the last walk, 9 per segment
     private Vector3[] _nodes; // growth-zone node positions, logical order, node 0 = growth-zone base
     private double[] _historyTimes;
     private double[] _history; // [(slot * n + storage) * 2 + 0/1]
@@ -136,8 +140,13 @@ public sealed class Stem
         _kv = new double[_n];
         _hs = new double[_n];
         _omc = new double[_n];
+        _ch = new double[_n];
+        _drawnU = new double[_n];
+        _drawnV = new double[_n];
+        _frames = new double[_n * 9];
         Array.Fill(_hs, 1.0);
         Array.Fill(_omc, 0.5);
+        Array.Fill(_ch, 1.0);
         _nodes = new Vector3[_n + 1];
         _historyTimes = new double[HistoryCapacity];
         _history = new double[HistoryCapacity * _n * 2];
@@ -151,7 +160,8 @@ public sealed class Stem
         _polyline[1] = _base;
         _polylineCount = 2;
 
-        // Record the initial stimulus as the whole past (h = 0 leaves the curvature unchanged).
+        // Draw the stem, then record the initial stimulus as the whole past (h = 0 leaves the curvature unchanged).
+        Walk(bend: false, 0, 0, Vector3.Zero, 0, 0);
         Walk(bend: true, 0, 0, Vector3.Zero, 0, 0);
     }
 
@@ -283,6 +293,12 @@ public sealed class Stem
         // Curvature and the delayed stimulus are stored in the segments' own frames, which turned with the base
         // frame above; re-orthonormalise to keep rounding from accumulating over many rotations.
         Orthonormalise();
+        for (int f = 0; f < _frames.Length; f += 3)
+        {
+            double x = _frames[f], y = _frames[f + 1];
+            _frames[f] = (x * c) + (y * s);
+            _frames[f + 1] = (-x * s) + (y * c);
+        }
     }
 
     /// <summary>A deep copy that evolves independently.</summary>
@@ -293,6 +309,10 @@ public sealed class Stem
         copy._kv = (double[])_kv.Clone();
         copy._hs = (double[])_hs.Clone();
         copy._omc = (double[])_omc.Clone();
+        copy._ch = (double[])_ch.Clone();
+        copy._drawnU = (double[])_drawnU.Clone();
+        copy._drawnV = (double[])_drawnV.Clone();
+        copy._frames = (double[])_frames.Clone();
         copy._nodes = (Vector3[])_nodes.Clone();
         copy._historyTimes = (double[])_historyTimes.Clone();
         copy._history = (double[])_history.Clone();
@@ -364,7 +384,6 @@ public sealed class Stem
     private void Walk(bool bend, double h, double epsDot, Vector3 lightDir, double nu, double grownM)
     {
         double decay = 1, gain = 0, nutU = 0, nutV = 0, cGravity = 0, cLight = 0;
-        double nutOldU = _nutationU, nutOldV = _nutationV;
         int pushSlot = -1, read0 = -1, read1 = -1;
         double readWeight = 0;
         if (bend)
@@ -399,8 +418,6 @@ public sealed class Stem
                     StartNutation(drive, lambda);
                 }
 
-                nutOldU = _nutationU;
-                nutOldV = _nutationV;
                 _nutationU = (_nutationU * decay) + nutU;
                 _nutationV = (_nutationV * decay) + nutV;
 
@@ -413,29 +430,25 @@ public sealed class Stem
             }
         }
 
-        // Scalars and local array references keep the loop in registers (this loop is the forecast's hot path).
-        double tx = _tb.X, ty = _tb.Y, tz = _tb.Z, ux = _ub.X, uy = _ub.Y, uz = _ub.Z, vx = _vb.X, vy = _vb.Y, vz = _vb.Z;
-        double px = _base.X, py = _base.Y, pz = _base.Z;
-        double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
-        double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, halfDsSq2 = 0.5 * ds * ds;
+        // Two passes. Pass 1 senses with each segment's frame from the last walk (stored), updates the curvature and
+        // evaluates the arc functions: no dependency between segments, so the work overlaps. Pass 2 carries the frame
+        // from base to apex, a short dependent chain per segment. (One fused pass was twice as slow: every segment
+        // waited for the one below.)
+        double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, quarterDs2 = 0.25 * ds * ds;
         // The nutation bends the basal segment only over its part not yet matured, so it fades out continuously.
         double basalNutationWeight = Math.Max(0, 1 - (_extra / _ds));
-        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, history = _history;
-        Vector3[] nodes = _nodes;
+        double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
+        double nutNewU = _nutationU, nutNewV = _nutationV;
+        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, chArray = _ch, history = _history;
+        double[] drawnU = _drawnU, drawnV = _drawnV, frames = _frames;
         int n = _n, head = _head;
-        nodes[0] = _base;
-        for (int i = 0; i < n; i++)
+        for (int s = 0; s < n; s++)
         {
-            int s = head + i;
-            if (s >= n)
-            {
-                s -= n;
-            }
-
+            bool basal = s == head;
             double ku = kuArray[s], kv = kvArray[s];
             double gku = ku, gkv = kv; // the tropic curvature drawn (differs from the state only in the maturing basal segment)
             double nutWeight = 1;
-            if (i == 0)
+            if (basal)
             {
                 nutWeight = basalNutationWeight;
                 if (_basalWeight > 0)
@@ -445,13 +458,17 @@ public sealed class Stem
                 }
             }
 
-            double sku = gku + (nutWeight * nutOldU), skv = gkv + (nutWeight * nutOldV); // as sensed: with the nutation
-
             if (bend)
             {
+                int f = s * 9;
+                double tx = frames[f], ty = frames[f + 1], tz = frames[f + 2];
+                double ux = frames[f + 3], uy = frames[f + 4], uz = frames[f + 5];
+                double vx = frames[f + 6], vy = frames[f + 7], vz = frames[f + 8];
+                double sku = drawnU[s], skv = drawnV[s]; // the curvature as drawn at the last walk
+
                 // Stimuli at the segment's midpoint tangent: turn the start-frame components by x = θ/2 in the bending
                 // plane, g += adj·κ with adj·|κ| = (cos x − 1)(g·κ̂) − sin x (g·t̂), without dividing by |κ|. The
-                // half-angle functions of the current κ were kept from the last transport.
+                // arc functions of the drawn κ were kept from the last walk.
                 double sinOverKm = hsArray[s] * halfDs; // sin(x)/|κ|
                 double cosMinusOneOverKm2 = -omcArray[s] * halfDs2; // (cos x − 1)/|κ|²
                 double gu = uz, gv = vz, lu = 0, lv = 0;
@@ -486,7 +503,7 @@ public sealed class Stem
                 kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain);
                 kuArray[s] = ku;
                 kvArray[s] = kv;
-                if (i != 0)
+                if (!basal)
                 {
                     gku = ku;
                     gkv = kv;
@@ -495,8 +512,7 @@ public sealed class Stem
                 {
                     // The basal segment matures bit by bit as it is passed by growth: its drawn (and finally frozen)
                     // curvature is the growth-weighted mean since it became basal. Freezing the instantaneous value
-                    // instead would lock one phase of the nutation into every matured segment, and when the freeze
-                    // interval is a multiple of the nutation period those kinks add up to a large false lean.
+                    // instead would lock the state of one moment into every matured segment.
                     _basalSumU += ku * grownM;
                     _basalSumV += kv * grownM;
                     _basalWeight += grownM;
@@ -510,36 +526,63 @@ public sealed class Stem
                 }
             }
 
+            // The arc functions of the new drawn curvature, for the transport below and the next step's sensing.
+            double dku = gku + (nutWeight * nutNewU), dkv = gkv + (nutWeight * nutNewV);
+            drawnU[s] = dku;
+            drawnV[s] = dkv;
+            ArcFunctions(((dku * dku) + (dkv * dkv)) * quarterDs2, out chArray[s], out hsArray[s], out omcArray[s]);
+        }
+
+        double cx = _tb.X, cy = _tb.Y, cz = _tb.Z, ax = _ub.X, ay = _ub.Y, az = _ub.Z, bx = _vb.X, by = _vb.Y, bz = _vb.Z;
+        double px = _base.X, py = _base.Y, pz = _base.Z;
+        double halfDsSq2 = 0.5 * ds * ds;
+        Vector3[] nodes = _nodes;
+        nodes[0] = _base;
+        for (int i = 0; i < n; i++)
+        {
+            int s = head + i;
+            if (s >= n)
+            {
+                s -= n;
+            }
+
+            int f = s * 9;
+            frames[f] = cx;
+            frames[f + 1] = cy;
+            frames[f + 2] = cz;
+            frames[f + 3] = ax;
+            frames[f + 4] = ay;
+            frames[f + 5] = az;
+            frames[f + 6] = bx;
+            frames[f + 7] = by;
+            frames[f + 8] = bz;
+
             // Carry the frame through the arc: rotation by θ = |κ|ds about t̂ × κ̂, division-free (κ may be zero).
             // With x = θ/2: sin θ/|κ| = ds·sinc(x)·cos x, (1 − cos θ)/|κ|² = ds²·sinc²(x)/2.
-            ku = gku + (nutWeight * _nutationU);
-            kv = gkv + (nutWeight * _nutationV);
+            double ku = drawnU[s], kv = drawnV[s], hs = hsArray[s];
             double km2 = (ku * ku) + (kv * kv);
-            HalfAngle(0.5 * Math.Sqrt(km2) * ds, out double ch, out double hs, out double omc);
-            hsArray[s] = hs;
-            omcArray[s] = omc;
-            double sinOverKmFull = ds * hs * ch;
+            double sinOverKmFull = ds * hs * chArray[s];
             double omc2 = halfDsSq2 * hs * hs;
-            double kx = (ku * ux) + (kv * vx), ky = (ku * uy) + (kv * vy), kz = (ku * uz) + (kv * vz);
-            px += (tx * sinOverKmFull) + (kx * omc2);
-            py += (ty * sinOverKmFull) + (ky * omc2);
-            pz += (tz * sinOverKmFull) + (kz * omc2);
+            double kx = (ku * ax) + (kv * bx), ky = (ku * ay) + (kv * by), kz = (ku * az) + (kv * bz);
+            px += (cx * sinOverKmFull) + (kx * omc2);
+            py += (cy * sinOverKmFull) + (ky * omc2);
+            pz += (cz * sinOverKmFull) + (kz * omc2);
             double ct = 1 - (omc2 * km2);
             double au = omc2 * ku, bu = sinOverKmFull * ku, av = omc2 * kv, bv = sinOverKmFull * kv;
-            ux -= (kx * au) + (tx * bu);
-            uy -= (ky * au) + (ty * bu);
-            uz -= (kz * au) + (tz * bu);
-            vx -= (kx * av) + (tx * bv);
-            vy -= (ky * av) + (ty * bv);
-            vz -= (kz * av) + (tz * bv);
-            tx = (tx * ct) + (kx * sinOverKmFull);
-            ty = (ty * ct) + (ky * sinOverKmFull);
-            tz = (tz * ct) + (kz * sinOverKmFull);
+            ax -= (kx * au) + (cx * bu);
+            ay -= (ky * au) + (cy * bu);
+            az -= (kz * au) + (cz * bu);
+            bx -= (kx * av) + (cx * bv);
+            by -= (ky * av) + (cy * bv);
+            bz -= (kz * av) + (cz * bv);
+            cx = (cx * ct) + (kx * sinOverKmFull);
+            cy = (cy * ct) + (ky * sinOverKmFull);
+            cz = (cz * ct) + (kz * sinOverKmFull);
             nodes[i + 1] = new Vector3(px, py, pz);
         }
 
-        _apexTangent = new Vector3(tx, ty, tz);
-        _apex = new Vector3(px + (tx * _extra), py + (ty * _extra), pz + (tz * _extra));
+        _apexTangent = new Vector3(cx, cy, cz);
+        _apex = new Vector3(px + (cx * _extra), py + (cy * _extra), pz + (cz * _extra));
     }
 
     /// <summary>Carries position and frame (t̂, u, v) through one arc of length ds and curvature κ = ku·u + kv·v.</summary>
@@ -567,7 +610,21 @@ public sealed class Stem
     }
 
     /// <summary>cos x, sin(x)/x and (1 − cos x)/x²; Taylor series for |x| &lt; 0.6 (error below 1e-12), the library otherwise.</summary>
+    /// <summary>cos x, sin(x)/x and (1 − cos x)/x² from x²: Taylor series below x = 0.6 (no square root), the library above.</summary>
     [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    private static void ArcFunctions(double x2, out double cos, out double sinc, out double oneMinusCosOverX2)
+    {
+        if (x2 < 0.36)
+        {
+            oneMinusCosOverX2 = 0.5 * (1 - (x2 * (1.0 / 12) * (1 - (x2 * (1.0 / 30) * (1 - (x2 * (1.0 / 56) * (1 - (x2 * (1.0 / 90)))))))));
+            cos = 1 - (x2 * oneMinusCosOverX2);
+            sinc = 1 - (x2 * (1.0 / 6) * (1 - (x2 * (1.0 / 20) * (1 - (x2 * (1.0 / 42) * (1 - (x2 * (1.0 / 72) * (1 - (x2 * (1.0 / 110))))))))));
+            return;
+        }
+
+        HalfAngle(Math.Sqrt(x2), out cos, out sinc, out oneMinusCosOverX2);
+    }
+
     private static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x < 0.6)
