@@ -24,8 +24,9 @@ namespace CanopyAdvisor.Core.Plants;
 /// Bending: in every growth-zone segment, with ε̇ = Ė/L_gz,
 /// dκ/dt = ε̇ [ (β/L_gz) g⊥(t − τ_g) + (ν/L_gz) ℓ⊥ − γ κ ] + nutation, with g⊥ = ẑ − (ẑ·t̂)t̂ (sine law),
 /// ℓ⊥ = l̂ − (l̂·t̂)t̂, l̂ the direction of the net blue flux vector (toward the light), ν = β·M(I),
-/// M(I) = a·I^b, β = B·γ. The stimuli are sensed at each segment's midpoint tangent (taken with the curvature of the
-/// step start), which makes the steady shape the implicit-midpoint discretisation of the continuous one. Over a
+/// M(I) = a·I^b, β = B·γ. The stimuli are sensed at each segment's midpoint tangent, on the shape drawn at the end
+/// of the previous step (all segments at once), which makes the steady shape the implicit-midpoint discretisation of
+/// the continuous one. Over a
 /// step the stimuli are held and the linear equation is solved exactly (exp(−ε̇γ dt) relaxation toward the forced
 /// state, and the rotating nutation drive integrated exactly), so steps with ε̇γ dt ≥ 1 stay stable.
 /// </para>
