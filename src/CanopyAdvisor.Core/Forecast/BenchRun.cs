@@ -53,7 +53,7 @@ internal sealed class BenchRun
 
         var light = new PointLight[count];
         ElongationPerStep = new double[tl.Count];
-        var sampler = new Sampler(this, count, tl, parameters.NutationPeriod);
+        var sampler = new Sampler(count, tl, parameters.NutationPeriod);
         int ringSize = Math.Max(1, (int)Math.Round(_windowHours / tl.Hours[Math.Min(tl.Count - 1, tl.AnchorEdge)]));
         var ringE = new double[ringSize];
         var ringN = new double[ringSize];
@@ -115,6 +115,10 @@ internal sealed class BenchRun
         }
 
         sampler.Finish();
+        NowEast = sampler.NowEast;
+        NowNorth = sampler.NowNorth;
+        EndEast = sampler.EndEast;
+        EndNorth = sampler.EndNorth;
 
         void Record(int edge, double[] e, double[] n, double mE, double mN)
         {
@@ -173,7 +177,7 @@ internal sealed class BenchRun
         var light = new PointLight[1];
         var east = new double[count];
         var north = new double[count];
-        var sampler = new Sampler(this, count, tl, parameters.NutationPeriod);
+        var sampler = new Sampler(count, tl, parameters.NutationPeriod);
         int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
         Measure(stems, east, north, out _, out _);
         sampler.Add(_firstEdge, east, north);
@@ -250,15 +254,13 @@ internal sealed class BenchRun
     /// <summary>Averages per-point lean vectors over the nutation period before now and before the horizon end.</summary>
     private sealed class Sampler
     {
-        private readonly BenchRun _owner;
         private readonly ForecastTimeline _tl;
         private readonly Instant _nowFrom, _now, _endFrom, _end;
         private readonly double[] _nowE, _nowN, _endE, _endN;
         private int _nowCount, _endCount;
 
-        public Sampler(BenchRun owner, int count, ForecastTimeline tl, Duration period)
+        public Sampler(int count, ForecastTimeline tl, Duration period)
         {
-            _owner = owner;
             _tl = tl;
             _now = tl.Edges[tl.AnchorEdge];
             _nowFrom = _now - period;
@@ -270,6 +272,10 @@ internal sealed class BenchRun
             _endN = new double[count];
         }
 
+        public double[] NowEast => _nowE;
+
+        public double[] NowNorth => _nowN;
+
         public double[] EndEast => _endE;
 
         public double[] EndNorth => _endN;
@@ -277,13 +283,13 @@ internal sealed class BenchRun
         public void Add(int edge, double[] east, double[] north)
         {
             Instant t = _tl.Edges[edge];
-            if (t >= _nowFrom && t <= _now)
+            if (t > _nowFrom && t <= _now)
             {
                 Accumulate(_nowE, _nowN, east, north);
                 _nowCount++;
             }
 
-            if (t >= _endFrom && t <= _end)
+            if (t > _endFrom && t <= _end)
             {
                 Accumulate(_endE, _endN, east, north);
                 _endCount++;
@@ -294,10 +300,6 @@ internal sealed class BenchRun
         {
             Scale(_nowE, _nowN, _nowCount);
             Scale(_endE, _endN, _endCount);
-            _owner.NowEast = _nowE;
-            _owner.NowNorth = _nowN;
-            _owner.EndEast = _endE;
-            _owner.EndNorth = _endN;
         }
 
         private static void Accumulate(double[] sumE, double[] sumN, double[] east, double[] north)
