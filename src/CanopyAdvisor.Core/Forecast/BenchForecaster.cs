@@ -1,0 +1,481 @@
+using System.Collections.Immutable;
+using System.Globalization;
+using CanopyAdvisor.Core.Geometry;
+using CanopyAdvisor.Core.Light;
+using CanopyAdvisor.Core.Plants;
+using CanopyAdvisor.Core.Plants.Growth;
+using CanopyAdvisor.Core.Sites;
+using CanopyAdvisor.Core.Structures;
+using CanopyAdvisor.Core.Validation;
+using NodaTime;
+
+namespace CanopyAdvisor.Core.Forecast;
+
+/// <summary>
+/// The bench lean forecast: for every bench with a lot, a stem per sample point (the AC model, <see cref="Stem"/>)
+/// driven by the simulated light and temperature from a spin-up before now to the end of the horizon, with the lot's
+/// height projected to its sale date and the leggy and leaning flags (MODEL.md §3–5, §7).
+/// </summary>
+/// <remarks>
+/// <para><b>Canopy.</b> Each bench with a lot gets the canopy of that lot: height = the lot's measured height; leaf area
+/// density = the crop's LAD × (reference spacing / lot spacing)², since the crop's LAD holds at the usual spacing
+/// (<see cref="ForecastRequest.ReferenceSpacingM"/>) and leaf area per plant spread over a pot's square of side
+/// spacing falls with its square; the sensing depth is half the crop's growth zone (the middle of the bending zone),
+/// at most the canopy height. The light field is compiled once with these canopies, so the lamp distance and canopy
+/// depth are held over the run: over a 7-day horizon a lot grows a few centimetres (Ė_ref ≈ 3–12 mm d⁻¹ in the crop
+/// library), which changes the inverse-square distance to lamps 2–3 m above by about 2–5 % of PPFD, small against the
+/// parameter uncertainty; for long horizons to a distant sale date the error grows.</para>
+/// <para><b>Time.</b> One step grid passes through now; steps are <see cref="DefaultStep"/> unless given. Outside light,
+/// local time (for lamp schedules), air temperature and the date's DIF are read once per step at its midpoint and
+/// shared by all benches.</para>
+/// <para><b>Spin-up.</b> Lean now is not measured, so the stems start upright at the later of the planting date's
+/// start and now − spin-up (14 days by default, about five bending time constants 1/(ε̇γ) of the library's crops), with
+/// the height carried back from the measured height by the elongation model (<see cref="HeightProjection"/>, hourly,
+/// at least 5 mm and the growth-zone length). Rotations already done are applied to every stem (<see cref="Stem.RotatePot"/>)
+/// at the start of the step in which they happened. After now no rotation is assumed: the forecast says what happens
+/// if nobody turns the pots (the rotation advice builds on it).</para>
+/// <para><b>Per step.</b> The light at every sample point (<see cref="CompiledLightField.Step(in Sky.OutsideLight, LocalTime, int, Span{PointLight})"/>);
+/// each point's stem is bent by its own net blue flux vector. Elongation is per bench: <see cref="ElongationModel"/>'s
+/// factors with the air temperature at the step, the date's DIF, the PSS of the bench's summed R:FR window fluxes
+/// (<see cref="PhytochromeState"/>; held from the last lit step in the dark, full sun at the start) and the recent DLI
+/// (the bench's mean DLI of the previous local day; the crop's DLI target before a whole day is known).</para>
+/// <para><b>Lean.</b> Each stem's lean vector is the horizontal part of its unit base-to-apex direction; the bench lean
+/// is the mean vector over the bench's points (tilt = asin of its length), and the worst point is the largest single
+/// lean. All stems of a bench nutate in phase, so every reported lean is averaged over one nutation period (the last
+/// period before now, before the horizon end, or trailing, for the grade check). The lean leaves grade when the trailing
+/// bench-mean lean exceeds the crop's limit (the bench mean, not the worst point, because a bench is graded and
+/// rotated as a whole; the worst point is reported beside it). The lean rate is <see cref="LeanRate"/> over the
+/// bench-mean lean from now to the horizon end.</para>
+/// <para><b>Height.</b> Heights now, at the horizon end and at the start of the sale date are the measured height plus
+/// the elongation integrated hourly from the measurement (taken at noon of its date) with the light of the bench's
+/// centre point and the same temperature source (<see cref="HeightProjection"/>). The stems use the bench-mean light,
+/// so their own heights differ slightly from this projection.</para>
+/// <para><b>Flags.</b> Leggy: <see cref="LegginessCauses"/> with the horizon's mean DLI, mean PSS (lit steps), mean DIF
+/// and the height at sale. Leaning: the lean leaves grade before the sale date and within the horizon.</para>
+/// <para><b>Uncertainty band.</b> For each key in <see cref="ForecastRequest.UncertaintyKeys"/>, the crop with that
+/// parameter at its range minimum and maximum (<see cref="CropConversions.WithParameterAtMinimum"/>) is rerun over the
+/// whole run on two representative points, the centre point and the point with the largest lean at the horizon, with the
+/// main run's light and elongation (Ė_ref variants scale the elongation). The bench lean of a rerun is the main
+/// bench lean shifted by the mean change of the two points' leans (floored at zero). The band is the range over the
+/// reruns and the main run; drivers are sorted by swing.</para>
+/// <para>Deterministic: benches run in parallel but each is self-contained, so the result does not depend on scheduling.</para>
+/// </remarks>
+public static class BenchForecaster
+{
+    /// <summary>The minutes that divide an hour, for the default step.</summary>
+    private static readonly int[] HourDivisors = [1, 2, 3, 4, 5, 6, 10, 12, 15];
+
+    /// <summary>The lowest start height of a stem, m (5 mm).</summary>
+    private const double MinimumStartHeightM = 0.005;
+
+    /// <summary>The default step for a set of crops: about a tenth of the shortest nutation period, rounded down to a
+    /// divisor of an hour, 1 to 15 minutes (so circumnutation is resolved by about ten steps per period).</summary>
+    /// <param name="crops">The crops present.</param>
+    public static Duration DefaultStep(IEnumerable<Crop> crops)
+    {
+        ArgumentNullException.ThrowIfNull(crops);
+        double shortest = double.PositiveInfinity;
+        foreach (Crop crop in crops)
+        {
+            shortest = Math.Min(shortest, crop.NutationPeriodHours.Value);
+        }
+
+        double tenthMinutes = double.IsFinite(shortest) ? shortest * 60 / 10 : 15;
+        int best = 1;
+        foreach (int d in HourDivisors)
+        {
+            if (d <= tenthMinutes + 1e-9)
+            {
+                best = d;
+            }
+        }
+
+        return Duration.FromMinutes(best);
+    }
+
+    /// <summary>Forecasts every bench that carries a lot.</summary>
+    /// <param name="request">The site, crops, sources and settings.</param>
+    /// <param name="progress">Receives the fraction done, in (0, 1], as benches finish (from worker threads).</param>
+    /// <param name="cancellationToken">Stops the run between benches.</param>
+    /// <returns>One forecast per bench with a lot, in site bench order.</returns>
+    /// <exception cref="InvalidInputException">The request, site, lots or crops are not usable; every problem is listed.</exception>
+    public static SiteForecast Run(ForecastRequest request, IProgress<double>? progress = null, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        Plan plan = Validate(request);
+        Site site = request.Site;
+        DateTimeZone zone = site.Zone;
+        Instant now = request.Now;
+        Instant end = now + request.Horizon;
+
+        // Canopies from the lots, then one compile for the whole run.
+        ImmutableArray<Bench> benches = site.Benches;
+        var benchesWithCanopy = benches.ToBuilder();
+        foreach (LotPlan lot in plan.Lots)
+        {
+            Bench bench = benches[lot.BenchIndex];
+            double heightM = lot.Lot.HeightMm / ModelConstants.MillimetresPerMetre;
+            double depthM = Math.Min(heightM, lot.Crop.GrowthZoneLengthMm.Value / ModelConstants.MillimetresPerMetre / 2);
+            double spacingRatio = request.ReferenceSpacingM / lot.Lot.SpacingM;
+            double lad = lot.Crop.LeafAreaDensityM2PerM3.Value * spacingRatio * spacingRatio;
+            benchesWithCanopy[lot.BenchIndex] = bench with { Canopy = new Canopy(heightM, depthM, lad) };
+        }
+
+        Site compiledSite = site with { Benches = benchesWithCanopy.MoveToImmutable() };
+        IEnclosure enclosure = EnclosureBuilder.Build(compiledSite);
+        CompiledLightField field = LightFieldCompiler.Compile(compiledSite, enclosure, request.LightOptions);
+
+        Duration dt = request.Step ?? DefaultStep(plan.Lots.Select(l => l.Crop));
+        Instant earliest = plan.Lots.Count == 0 ? now : plan.Lots.Min(l => l.Start);
+        var timeline = new ForecastTimeline(earliest, now, end, dt, request.OutsideLight, request.Temperature, zone);
+        Instant hourFrom = plan.Lots.Count == 0 ? now : plan.Lots.Min(l => Min(l.Start, l.MeasuredAt));
+        Instant hourTo = plan.Lots.Count == 0 ? end : Max(end, plan.Lots.Max(l => Max(l.SaleAt, l.MeasuredAt)));
+        var hourly = new ForecastTimeline(hourFrom, now, hourTo, Duration.FromHours(1), request.OutsideLight, request.Temperature, zone);
+
+        var results = new BenchForecast[plan.Lots.Count];
+        int done = 0;
+        var options = new ParallelOptions { CancellationToken = cancellationToken };
+        Parallel.For(0, plan.Lots.Count, options, i =>
+        {
+            results[i] = ForecastBench(request, plan.Lots[i], field, timeline, hourly);
+            int finished = Interlocked.Increment(ref done);
+            progress?.Report(finished / (double)plan.Lots.Count);
+        });
+
+        return new SiteForecast(now, end, dt, [.. results], timeline.MissingLight, timeline.MissingTemperature);
+    }
+
+    private static BenchForecast ForecastBench(
+        ForecastRequest request, LotPlan lot, CompiledLightField field, ForecastTimeline timeline, ForecastTimeline hourly)
+    {
+        Crop crop = lot.Crop;
+        StemParameters parameters = crop.ToStemParameters();
+        var rate = new ElongationRate(crop);
+        double dliFallback = crop.DliTarget.Value;
+        (int first, int count) = field.PointsOfBench(lot.BenchIndex);
+        int centre = CentrePoint(field, first, count);
+        Instant now = request.Now;
+        Instant end = timeline.Edges[^1];
+
+        var projection = new HeightProjection(field, hourly, centre, rate, dliFallback);
+        double measuredM = lot.Lot.HeightMm / ModelConstants.MillimetresPerMetre;
+        double HeightAt(Instant t) => Math.Max(0, measuredM + projection.GrowthM(lot.MeasuredAt, t));
+        int firstEdge = timeline.FirstEdgeAtOrAfter(lot.Start);
+        double startHeightM = Math.Max(
+            Math.Max(MinimumStartHeightM, parameters.GrowthZoneLengthM),
+            HeightAt(timeline.Edges[firstEdge]));
+
+        ImmutableArray<RotationRecord> rotations = lot.Lot.Rotations.IsDefault
+            ? []
+            : [.. lot.Lot.Rotations.Where(r => r.At < now).OrderBy(r => r.At)];
+        var run = new BenchRun(field, timeline, firstEdge, rotations, parameters.NutationPeriod);
+        Angle gradeLimit = Angle.FromDegrees(crop.LeanGradeLimitDeg.Value);
+        Instant gradeEnd = Min(end, lot.SaleAt);
+        run.RunMain(first, count, parameters, startHeightM, request.GrowthZoneSegments, rate, dliFallback, gradeEnd, gradeLimit.Radians);
+
+        LeanReading leanNow = MeanLean(run.NowEast, run.NowNorth);
+        LeanReading leanEnd = MeanLean(run.EndEast, run.EndNorth);
+        (LeanReading worstNow, _) = Worst(run.NowEast, run.NowNorth);
+        (LeanReading worstEnd, int worstIndex) = Worst(run.EndEast, run.EndNorth);
+
+        double rateDegPerDay = LeanRateOf(run, parameters.NutationPeriod, leanNow, leanEnd, now, end);
+        double horizonDays = run.HorizonHours / 24;
+        double meanDli = horizonDays > 0 ? run.HorizonPpfdSeconds / ModelConstants.MicromolesPerMole / horizonDays : 0;
+        double meanPss = run.HorizonLitHours > 0 ? run.HorizonPssHours / run.HorizonLitHours : PhytochromeState.FullSun;
+        double meanDif = run.HorizonHours > 0 ? run.HorizonDifHours / run.HorizonHours : 0;
+        double heightNowMm = HeightAt(now) * ModelConstants.MillimetresPerMetre;
+        double heightEndMm = HeightAt(end) * ModelConstants.MillimetresPerMetre;
+        double heightSaleMm = HeightAt(lot.SaleAt) * ModelConstants.MillimetresPerMetre;
+
+        var flags = ImmutableArray.CreateBuilder<ForecastFlag>();
+        LegginessCauses causes = LegginessCauses.Evaluate(crop, meanDli, Math.Clamp(meanPss, 0, 1), meanDif, heightSaleMm);
+        foreach (LegginessCause cause in causes.Active)
+        {
+            flags.Add(new ForecastFlag(ForecastFlagKind.Leggy, CauseName(cause.Kind), cause.Value, cause.Limit, cause.Unit));
+        }
+
+        if (run.LeavesGradeAt is not null)
+        {
+            flags.Add(new ForecastFlag(ForecastFlagKind.Leaning, "leanOverGrade", run.LeanAtLeaveDeg, gradeLimit.Degrees, "deg"));
+        }
+
+        LeanUncertainty? band = null;
+        if (request.IncludeUncertainty && !request.UncertaintyKeys.IsDefaultOrEmpty)
+        {
+            int worstPoint = first + worstIndex;
+            int[] points = worstPoint == centre ? [centre] : [centre, worstPoint];
+            band = Band(request, lot, run, points, first, startHeightM, leanEnd);
+        }
+
+        return new BenchForecast(
+            lot.Lot.BenchId,
+            lot.Lot.Id,
+            crop.Id,
+            leanNow,
+            worstNow,
+            leanEnd,
+            worstEnd,
+            rateDegPerDay,
+            gradeLimit,
+            run.LeavesGradeAt,
+            heightNowMm,
+            heightEndMm,
+            heightSaleMm,
+            crop.HeightGradeLimitMm.Value,
+            meanDli,
+            meanPss,
+            meanDif,
+            band,
+            flags.ToImmutable(),
+            [.. run.EndEast.Select((e, i) => LeanReading.FromLeanVector(e, run.EndNorth[i]))]);
+    }
+
+    private static LeanUncertainty Band(
+        ForecastRequest request, LotPlan lot, BenchRun run, int[] points, int first, double startHeightM, LeanReading leanEnd)
+    {
+        Crop crop = lot.Crop;
+
+        // The main run's lean of the representative points, as the baseline of the shifts.
+        double baseMean = 0;
+        foreach (int p in points)
+        {
+            baseMean += Tilt(run.EndEast[p - first], run.EndNorth[p - first]);
+        }
+
+        baseMean /= points.Length;
+        double low = leanEnd.Tilt.Radians, high = low;
+        var swings = new List<ParameterSwing>();
+        foreach (string key in request.UncertaintyKeys)
+        {
+            Angle Rerun(Crop variant)
+            {
+                StemParameters parameters = variant.ToStemParameters();
+                double scale = key == "referenceElongationMmPerDay"
+                    ? variant.ReferenceElongationMmPerDay.Value / crop.ReferenceElongationMmPerDay.Value
+                    : 1;
+                double start = Math.Max(startHeightM, parameters.GrowthZoneLengthM);
+                (double East, double North)[] ends = run.RunPoints(points, parameters, start, request.GrowthZoneSegments, run.ElongationPerStep, scale);
+                double mean = ends.Average(e => Tilt(e.East, e.North));
+                return Angle.FromRadians(Math.Max(0, leanEnd.Tilt.Radians + mean - baseMean));
+            }
+
+            Angle atMinimum = Rerun(crop.WithParameterAtMinimum(key));
+            Angle atMaximum = Rerun(crop.WithParameterAtMaximum(key));
+            low = Math.Min(low, Math.Min(atMinimum.Radians, atMaximum.Radians));
+            high = Math.Max(high, Math.Max(atMinimum.Radians, atMaximum.Radians));
+            swings.Add(new ParameterSwing(key, atMinimum, atMaximum));
+        }
+
+        ImmutableArray<ParameterSwing> drivers = [.. swings.Select((s, i) => (s, i)).OrderByDescending(x => x.s.Swing.Radians).ThenBy(x => x.i).Select(x => x.s)];
+        return new LeanUncertainty(Angle.FromRadians(low), Angle.FromRadians(high), drivers);
+    }
+
+    private static double LeanRateOf(BenchRun run, Duration period, LeanReading now, LeanReading end, Instant from, Instant to)
+    {
+        double days = (to - from).TotalDays;
+        if (run.RateTimes.Count >= 2 && run.RateTimes[^1] - run.RateTimes[0] > period)
+        {
+            return LeanRate.DegreesPerDay(run.RateTimes, run.RateVectors, period);
+        }
+
+        return days > 0 ? (end.Tilt.Degrees - now.Tilt.Degrees) / days : 0;
+    }
+
+    private static int CentrePoint(CompiledLightField field, int first, int count)
+    {
+        Bench bench = field.Benches[field.Points[first].BenchIndex];
+        double midAlong = (bench.SamplesAlongLength - 1) / 2.0, midAcross = (bench.SamplesAcrossWidth - 1) / 2.0;
+        int best = first;
+        double bestDistance = double.PositiveInfinity;
+        for (int p = first; p < first + count; p++)
+        {
+            SamplePoint sp = field.Points[p];
+            double d = Math.Pow(sp.AlongIndex - midAlong, 2) + Math.Pow(sp.AcrossIndex - midAcross, 2);
+            if (d < bestDistance - 1e-12)
+            {
+                bestDistance = d;
+                best = p;
+            }
+        }
+
+        return best;
+    }
+
+    private static LeanReading MeanLean(double[] east, double[] north)
+    {
+        double e = 0, n = 0;
+        for (int i = 0; i < east.Length; i++)
+        {
+            e += east[i];
+            n += north[i];
+        }
+
+        return LeanReading.FromLeanVector(e / east.Length, n / east.Length);
+    }
+
+    private static (LeanReading Lean, int Index) Worst(double[] east, double[] north)
+    {
+        int best = 0;
+        double bestLength = -1;
+        for (int i = 0; i < east.Length; i++)
+        {
+            double length = (east[i] * east[i]) + (north[i] * north[i]);
+            if (length > bestLength)
+            {
+                bestLength = length;
+                best = i;
+            }
+        }
+
+        return (LeanReading.FromLeanVector(east[best], north[best]), best);
+    }
+
+    private static double Tilt(double east, double north) => Math.Asin(Math.Min(1, Math.Sqrt((east * east) + (north * north))));
+
+    private static string CauseName(LegginessCauseKind kind) => kind switch
+    {
+        LegginessCauseKind.LowDli => "lowDli",
+        LegginessCauseKind.LowPhytochromeState => "lowPhytochromeState",
+        LegginessCauseKind.HighDif => "highDif",
+        _ => "heightOverGrade",
+    };
+
+    private static Instant Min(Instant a, Instant b) => a < b ? a : b;
+
+    private static Instant Max(Instant a, Instant b) => a > b ? a : b;
+
+    private static Plan Validate(ForecastRequest request)
+    {
+        var errors = new List<ValidationError>();
+        Site site = request.Site;
+        if (site is null)
+        {
+            throw new InvalidInputException("site", "is required");
+        }
+
+        SitePaths paths = request.Paths ?? SitePaths.Default;
+        errors.AddRange(SiteValidator.Validate(site, paths));
+        if (request.Crops is null)
+        {
+            errors.Add(new ValidationError("crops", "is required"));
+        }
+
+        if (request.OutsideLight is null)
+        {
+            errors.Add(new ValidationError("outsideLight", "is required"));
+        }
+
+        if (request.Temperature is null)
+        {
+            errors.Add(new ValidationError("temperature", "is required"));
+        }
+
+        if (request.Horizon < Duration.FromHours(1) || request.Horizon > Duration.FromDays(366))
+        {
+            errors.Add(new ValidationError("horizon", $"must be between 1 hour and 366 days, got {request.Horizon.TotalDays.ToString("0.###", CultureInfo.InvariantCulture)} days"));
+        }
+
+        if (request.Step is { } step && (step < Duration.FromMinutes(1) || step > Duration.FromHours(1)))
+        {
+            errors.Add(new ValidationError("step", "must be between 1 and 60 minutes"));
+        }
+
+        if (request.SpinUp < Duration.Zero || request.SpinUp > Duration.FromDays(60))
+        {
+            errors.Add(new ValidationError("spinUp", "must be between 0 and 60 days"));
+        }
+
+        if (!(request.ReferenceSpacingM > 0) || !double.IsFinite(request.ReferenceSpacingM))
+        {
+            errors.Add(new ValidationError("referenceSpacingM", "must be > 0"));
+        }
+
+        if (request.GrowthZoneSegments is < 1 or > 64)
+        {
+            errors.Add(new ValidationError("growthZoneSegments", "must be 1 to 64"));
+        }
+
+        ImmutableArray<string> keys = request.UncertaintyKeys.IsDefault ? [] : request.UncertaintyKeys;
+        for (int k = 0; k < keys.Length; k++)
+        {
+            if (!SupportedUncertaintyKeysContains(keys[k]))
+            {
+                errors.Add(new ValidationError($"uncertaintyKeys[{k}]", $"'{keys[k]}' is not one of {string.Join(", ", ForecastRequest.SupportedUncertaintyKeys)}"));
+            }
+        }
+
+        var lots = new List<LotPlan>();
+        ImmutableArray<Lot> siteLots = site.Lots.IsDefault ? [] : site.Lots;
+        ImmutableArray<Bench> benches = site.Benches.IsDefault ? [] : site.Benches;
+        DateTimeZone? zone = site.Zone;
+        LocalDate? today = zone is null ? null : request.Now.InZone(zone).Date;
+        var checkedCrops = new HashSet<string>(StringComparer.Ordinal);
+        for (int i = 0; i < siteLots.Length; i++)
+        {
+            Lot lot = siteLots[i];
+            string path = SiteValidator.LotPath(i);
+            if (lot is null || zone is null || today is not LocalDate date)
+            {
+                continue;
+            }
+
+            Crop? crop = null;
+            if (request.Crops is not null && lot.CropId is not null && !request.Crops.TryGetValue(lot.CropId, out crop))
+            {
+                errors.Add(new ValidationError($"{path}.crop", $"unknown crop '{lot.CropId}'"));
+            }
+            else if (crop is not null && checkedCrops.Add(lot.CropId!))
+            {
+                foreach (ValidationError e in CropValidator.Validate(crop))
+                {
+                    errors.Add(new ValidationError($"crops.{lot.CropId}.{e.Path}", e.Message));
+                }
+            }
+
+            if (lot.SaleOn < date)
+            {
+                errors.Add(new ValidationError($"{path}.saleOn", $"{Iso(lot.SaleOn)} is before today ({Iso(date)}): the lot is sold"));
+            }
+
+            if (lot.PlantedOn > date)
+            {
+                errors.Add(new ValidationError($"{path}.plantedOn", $"{Iso(lot.PlantedOn)} is after today ({Iso(date)}): nothing to forecast yet"));
+            }
+
+            if (lot.MeasuredOn > date)
+            {
+                errors.Add(new ValidationError($"{path}.measuredOn", $"{Iso(lot.MeasuredOn)} is after today ({Iso(date)})"));
+            }
+
+            int benchIndex = benches.IndexOf(benches.FirstOrDefault(b => b is not null && b.Id == lot.BenchId)!);
+            if (crop is null || benchIndex < 0)
+            {
+                continue;
+            }
+
+            Instant planted = lot.PlantedOn.AtStartOfDayInZone(zone).ToInstant();
+            Instant spinStart = request.Now - request.SpinUp;
+            Instant start = planted > spinStart ? planted : spinStart;
+            Instant measured = lot.MeasuredOn.At(new LocalTime(12, 0)).InZoneLeniently(zone).ToInstant();
+            Instant sale = lot.SaleOn.AtStartOfDayInZone(zone).ToInstant();
+            lots.Add(new LotPlan(lot, crop, benchIndex, Min(start, request.Now), measured, sale));
+        }
+
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+
+        lots.Sort((a, b) => a.BenchIndex.CompareTo(b.BenchIndex));
+        return new Plan(lots);
+    }
+
+    private static bool SupportedUncertaintyKeysContains(string? key) =>
+        key is not null && ForecastRequest.SupportedUncertaintyKeys.Contains(key);
+
+    private static string Iso(LocalDate date) => date.ToString("uuuu-MM-dd", CultureInfo.InvariantCulture);
+
+    private sealed record Plan(List<LotPlan> Lots);
+
+    private sealed record LotPlan(Lot Lot, Crop Crop, int BenchIndex, Instant Start, Instant MeasuredAt, Instant SaleAt);
+}

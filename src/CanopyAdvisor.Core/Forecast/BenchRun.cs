@@ -1,0 +1,328 @@
+using System.Collections.Immutable;
+using CanopyAdvisor.Core.Geometry;
+using CanopyAdvisor.Core.Light;
+using CanopyAdvisor.Core.Plants;
+using CanopyAdvisor.Core.Plants.Growth;
+using CanopyAdvisor.Core.Sites;
+using NodaTime;
+
+namespace CanopyAdvisor.Core.Forecast;
+
+/// <summary>The stems of one bench stepped over a <see cref="ForecastTimeline"/>: the main run (every sample point, the
+/// bench's light sums and elongation rate) or a rerun of a few points with other stem parameters.</summary>
+/// <remarks>Single-threaded and self-contained, so benches can run in parallel with results that do not depend on
+/// scheduling.</remarks>
+internal sealed class BenchRun
+{
+    private readonly CompiledLightField _field;
+    private readonly ForecastTimeline _timeline;
+    private readonly int _firstEdge;
+    private readonly ImmutableArray<RotationRecord> _rotations;
+    private readonly double _windowHours;
+
+    public BenchRun(CompiledLightField field, ForecastTimeline timeline, int firstEdge, ImmutableArray<RotationRecord> rotations, Duration nutationPeriod)
+    {
+        _field = field;
+        _timeline = timeline;
+        _firstEdge = firstEdge;
+        _rotations = rotations;
+        _windowHours = nutationPeriod.TotalHours;
+    }
+
+    // Outputs of the main run.
+    public double[] NowEast = [], NowNorth = [], EndEast = [], EndNorth = [];
+    public double[] ElongationPerStep = [];
+    public Instant? LeavesGradeAt;
+    public double LeanAtLeaveDeg;
+    public List<Instant> RateTimes = [];
+    public List<Vector3> RateVectors = [];
+    public double HorizonPpfdSeconds, HorizonPssHours, HorizonLitHours, HorizonDifHours, HorizonHours;
+
+    /// <summary>The main run over all points of a bench.</summary>
+    public void RunMain(
+        int firstPoint, int count, StemParameters parameters, double startHeightM, int segments, ElongationRate rate,
+        double dliFallback, Instant gradeEnd, double gradeLimitRadians)
+    {
+        ForecastTimeline tl = _timeline;
+        var stems = new Stem[count];
+        Stem prototype = Stem.Upright(parameters, startHeightM, segments);
+        for (int i = 0; i < count; i++)
+        {
+            stems[i] = i == 0 ? prototype : prototype.Clone();
+        }
+
+        var light = new PointLight[count];
+        ElongationPerStep = new double[tl.Count];
+        var sampler = new Sampler(count, tl, parameters.NutationPeriod);
+        int ringSize = Math.Max(1, (int)Math.Round(_windowHours / tl.Hours[Math.Min(tl.Count - 1, tl.AnchorEdge)]));
+        var ringE = new double[ringSize];
+        var ringN = new double[ringSize];
+        int ringCount = 0, ringNext = 0;
+        double rateFirstEnd = (tl.Edges[tl.AnchorEdge] + Duration.FromHours(_windowHours)).ToUnixTimeTicks();
+        double rateLastStart = (tl.Edges[^1] - Duration.FromHours(_windowHours)).ToUnixTimeTicks();
+
+        var days = new DailyLight(tl.Day[Math.Min(_firstEdge, tl.Count - 1)], dliFallback);
+        double pss = PhytochromeState.FullSun;
+        int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
+        var east = new double[count];
+        var north = new double[count];
+
+        Measure(stems, east, north, out double meanE, out double meanN);
+        Record(_firstEdge, east, north, meanE, meanN);
+        for (int s = _firstEdge; s < tl.Count; s++)
+        {
+            rotation = ApplyRotations(stems, rotation, tl.Edges[s + 1]);
+            _field.Step(tl.Outside[s], tl.LocalTimes[s], firstPoint, light);
+            double ppfd = 0, red = 0, farRed = 0;
+            for (int i = 0; i < count; i++)
+            {
+                ppfd += light[i].HorizontalPpfd;
+                red += light[i].Red660;
+                farRed += light[i].FarRed730;
+            }
+
+            ppfd /= count;
+            double seconds = tl.Hours[s] * ModelConstants.SecondsPerHour;
+            double recentDli = days.Add(tl.Day[s], ppfd * seconds);
+            bool lit = farRed > 0;
+            if (lit)
+            {
+                pss = PhytochromeState.Evaluate(red / farRed);
+            }
+
+            double e = rate.MetresPerHour(tl.AirC[s], tl.DifK[s], pss, recentDli);
+            ElongationPerStep[s] = e;
+            Duration dt = tl.Steps[s];
+            for (int i = 0; i < count; i++)
+            {
+                stems[i].Step(dt, e, light[i].BlueVector);
+            }
+
+            if (s >= tl.AnchorEdge)
+            {
+                HorizonHours += tl.Hours[s];
+                HorizonPpfdSeconds += ppfd * seconds;
+                HorizonDifHours += tl.DifK[s] * tl.Hours[s];
+                if (lit)
+                {
+                    HorizonPssHours += pss * tl.Hours[s];
+                    HorizonLitHours += tl.Hours[s];
+                }
+            }
+
+            Measure(stems, east, north, out meanE, out meanN);
+            Record(s + 1, east, north, meanE, meanN);
+        }
+
+        sampler.Finish();
+        NowEast = sampler.NowEast;
+        NowNorth = sampler.NowNorth;
+        EndEast = sampler.EndEast;
+        EndNorth = sampler.EndNorth;
+
+        void Record(int edge, double[] e, double[] n, double mE, double mN)
+        {
+            sampler.Add(edge, e, n);
+            ringE[ringNext] = mE;
+            ringN[ringNext] = mN;
+            ringNext = (ringNext + 1) % ringSize;
+            ringCount = Math.Min(ringCount + 1, ringSize);
+            Instant t = tl.Edges[edge];
+            if (edge < tl.AnchorEdge)
+            {
+                return;
+            }
+
+            if (LeavesGradeAt is null && t <= gradeEnd)
+            {
+                double ae = 0, an = 0;
+                for (int k = 0; k < ringCount; k++)
+                {
+                    ae += ringE[k];
+                    an += ringN[k];
+                }
+
+                double tilt = Math.Asin(Math.Min(1, Math.Sqrt((ae * ae) + (an * an)) / ringCount));
+                if (tilt > gradeLimitRadians)
+                {
+                    LeavesGradeAt = t;
+                    LeanAtLeaveDeg = tilt * Angle.DegreesPerRadian;
+                }
+            }
+
+            double ticks = t.ToUnixTimeTicks();
+            double stepTicks = tl.Steps[Math.Min(edge, tl.Count - 1)].TotalTicks;
+            if (ticks <= rateFirstEnd + stepTicks || ticks >= rateLastStart - stepTicks)
+            {
+                double h2 = Math.Min(1, (mE * mE) + (mN * mN));
+                RateTimes.Add(t);
+                RateVectors.Add(new Vector3(mE, mN, Math.Sqrt(1 - h2)));
+            }
+        }
+    }
+
+    /// <summary>A rerun of single points with other parameters and the main run's elongation scaled; returns each point's
+    /// lean vector at the horizon end (averaged over the last nutation period).</summary>
+    public (double East, double North)[] RunPoints(
+        int[] points, StemParameters parameters, double startHeightM, int segments, double[] elongation, double scale)
+    {
+        ForecastTimeline tl = _timeline;
+        int count = points.Length;
+        var stems = new Stem[count];
+        for (int i = 0; i < count; i++)
+        {
+            stems[i] = Stem.Upright(parameters, startHeightM, segments);
+        }
+
+        var light = new PointLight[1];
+        var east = new double[count];
+        var north = new double[count];
+        var sampler = new Sampler(count, tl, parameters.NutationPeriod);
+        int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
+        Measure(stems, east, north, out _, out _);
+        sampler.Add(_firstEdge, east, north);
+        for (int s = _firstEdge; s < tl.Count; s++)
+        {
+            rotation = ApplyRotations(stems, rotation, tl.Edges[s + 1]);
+            Duration dt = tl.Steps[s];
+            double e = elongation[s] * scale;
+            for (int i = 0; i < count; i++)
+            {
+                _field.Step(tl.Outside[s], tl.LocalTimes[s], points[i], light);
+                stems[i].Step(dt, e, light[0].BlueVector);
+            }
+
+            Measure(stems, east, north, out _, out _);
+            sampler.Add(s + 1, east, north);
+        }
+
+        sampler.Finish();
+        var result = new (double, double)[count];
+        for (int i = 0; i < count; i++)
+        {
+            result[i] = (sampler.EndEast[i], sampler.EndNorth[i]);
+        }
+
+        return result;
+    }
+
+    private static void Measure(Stem[] stems, double[] east, double[] north, out double meanEast, out double meanNorth)
+    {
+        double se = 0, sn = 0;
+        for (int i = 0; i < stems.Length; i++)
+        {
+            Vector3 a = stems[i].ApexOffset;
+            double inverse = 1 / a.Length;
+            east[i] = a.X * inverse;
+            north[i] = a.Y * inverse;
+            se += east[i];
+            sn += north[i];
+        }
+
+        meanEast = se / stems.Length;
+        meanNorth = sn / stems.Length;
+    }
+
+    private int SkipRotationsBefore(Instant start)
+    {
+        int r = 0;
+        while (r < _rotations.Length && _rotations[r].At < start)
+        {
+            r++;
+        }
+
+        return r;
+    }
+
+    // Rotations done before the end of a step are applied at its start (the step grid resolves their time to one step).
+    private int ApplyRotations(Stem[] stems, int next, Instant stepEnd)
+    {
+        while (next < _rotations.Length && _rotations[next].At < stepEnd)
+        {
+            Angle angle = _rotations[next].Angle;
+            foreach (Stem stem in stems)
+            {
+                stem.RotatePot(angle);
+            }
+
+            next++;
+        }
+
+        return next;
+    }
+
+    /// <summary>Averages per-point lean vectors over the nutation period before now and before the horizon end.</summary>
+    private sealed class Sampler
+    {
+        private readonly ForecastTimeline _tl;
+        private readonly Instant _nowFrom, _now, _endFrom, _end;
+        private readonly double[] _nowE, _nowN, _endE, _endN;
+        private int _nowCount, _endCount;
+
+        public Sampler(int count, ForecastTimeline tl, Duration period)
+        {
+            _tl = tl;
+            _now = tl.Edges[tl.AnchorEdge];
+            _nowFrom = _now - period;
+            _end = tl.Edges[^1];
+            _endFrom = _end - period;
+            _nowE = new double[count];
+            _nowN = new double[count];
+            _endE = new double[count];
+            _endN = new double[count];
+        }
+
+        public double[] NowEast => _nowE;
+
+        public double[] NowNorth => _nowN;
+
+        public double[] EndEast => _endE;
+
+        public double[] EndNorth => _endN;
+
+        public void Add(int edge, double[] east, double[] north)
+        {
+            Instant t = _tl.Edges[edge];
+            if (t > _nowFrom && t <= _now)
+            {
+                Accumulate(_nowE, _nowN, east, north);
+                _nowCount++;
+            }
+
+            if (t > _endFrom && t <= _end)
+            {
+                Accumulate(_endE, _endN, east, north);
+                _endCount++;
+            }
+        }
+
+        public void Finish()
+        {
+            Scale(_nowE, _nowN, _nowCount);
+            Scale(_endE, _endN, _endCount);
+        }
+
+        private static void Accumulate(double[] sumE, double[] sumN, double[] east, double[] north)
+        {
+            for (int i = 0; i < sumE.Length; i++)
+            {
+                sumE[i] += east[i];
+                sumN[i] += north[i];
+            }
+        }
+
+        private static void Scale(double[] e, double[] n, int count)
+        {
+            if (count == 0)
+            {
+                return;
+            }
+
+            for (int i = 0; i < e.Length; i++)
+            {
+                e[i] /= count;
+                n[i] /= count;
+            }
+        }
+    }
+}
