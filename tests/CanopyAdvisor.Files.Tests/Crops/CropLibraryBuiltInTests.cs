@@ -88,7 +88,7 @@ public class CropLibraryBuiltInTests
         Crop compact = Library.Get("petunia-compact");
         Assert.Equal("petunia", compact.BaseId);
         Assert.Equal(CropGroup.BeddingPlant, compact.Group);
-        Assert.Equal(3.5, compact.ReferenceElongationMmPerDay.Value);
+        Assert.Equal(2, compact.ReferenceElongationMmPerDay.Value);
         Assert.StartsWith("demo", compact.ReferenceElongationMmPerDay.Provenance, StringComparison.Ordinal);
         string[] overridden = ["referenceElongationMmPerDay", "difSensitivityPerKelvin", "heightGradeLimitMm"];
         foreach (string key in CropConversions.ParameterKeys.Except(overridden))

@@ -58,7 +58,7 @@ public sealed class CropLibraryUserFolderTests : IDisposable
         Write("petunia.toml", CropFileTemplate.Text());
         CropLibrary library = CropLibrary.Load([_folder]);
         Assert.Equal(3, library.Get("petunia-compact").BalanceNumber.Value);     // from the user's petunia
-        Assert.Equal(3.5, library.Get("petunia-compact").ReferenceElongationMmPerDay.Value); // the variant's own
+        Assert.Equal(2, library.Get("petunia-compact").ReferenceElongationMmPerDay.Value); // the variant's own
     }
 
     [Fact]
