@@ -28,7 +28,7 @@ namespace CanopyAdvisor.Core.Forecast;
 /// <para><b>Time.</b> One step grid passes through now; steps are <see cref="DefaultStep"/> unless given. Outside light,
 /// local time (for lamp schedules), air temperature and the date's DIF are read once per step at its midpoint and
 /// shared by all benches.</para>
-/// <para><b>Spin-up.</b> Lean now is not measured, so the stems start upright at the later of the planting date's
+/// <para><b>Spin-up.</b> Lean now is not measured, so the stems start upright (steps of <see cref="SpinUpStep"/>) at the later of the planting date's
 /// start and now − spin-up (14 days by default, about five bending time constants 1/(ε̇γ) of the library's crops), with
 /// the height carried back from the measured height by the elongation model (<see cref="HeightProjection"/>, hourly,
 /// at least 5 mm and the growth-zone length). Rotations already done are applied to every stem (<see cref="Stem.RotatePot"/>)
@@ -54,10 +54,15 @@ namespace CanopyAdvisor.Core.Forecast;
 /// and the height at sale. Leaning: the lean leaves grade before the sale date and within the horizon.</para>
 /// <para><b>Uncertainty band.</b> For each key in <see cref="ForecastRequest.UncertaintyKeys"/>, the crop with that
 /// parameter at its range minimum and maximum (<see cref="CropConversions.WithParameterAtMinimum"/>) is rerun over the
-/// whole run on two representative points, the centre point and the point with the largest lean at the horizon, with the
-/// main run's light and elongation (Ė_ref variants scale the elongation). The bench lean of a rerun is the main
-/// bench lean shifted by the mean change of the two points' leans (floored at zero). The band is the range over the
-/// reruns and the main run; drivers are sorted by swing.</para>
+/// whole run (spin-up and horizon) on two representative points, the centre point and the point with the largest
+/// lean at the horizon, with the main run's elongation per step (Ė_ref variants scale it) and the points' light
+/// computed once per step for all reruns. The start height is not re-derived for a rerun. The bench lean of a rerun
+/// is the main bench lean shifted by the mean change of the two points' leans (floored at zero). The band is the
+/// range over the reruns and the main run; drivers are sorted by swing. Cost: 2 points × 2 ends × keys stems per
+/// bench beside the bench's own (16 more for 4 keys).</para>
+/// <para><b>Accuracy.</b> Changing the step between 2 and 30 minutes changes the lean at the horizon by under 1 % in
+/// the tests' winter glasshouse; the growth-zone discretisation matters more (8 segments differ from 16 by about 4 %
+/// in lean now), so <see cref="ForecastRequest.GrowthZoneSegments"/> stays at the stem model's default of 8.</para>
 /// <para>Deterministic: benches run in parallel but each is self-contained, so the result does not depend on scheduling.</para>
 /// </remarks>
 public static class BenchForecaster
@@ -118,6 +123,12 @@ public static class BenchForecaster
         DateTimeZone zone = site.Zone;
         Instant now = request.Now;
         Instant end = now + request.Horizon;
+        Duration dt = request.Step ?? DefaultStep(plan.Lots.Select(l => l.Crop));
+        if (plan.Lots.Count == 0)
+        {
+            progress?.Report(1);
+            return new SiteForecast(now, end, dt, [], 0, 0);
+        }
 
         // Canopies from the lots, then one compile for the whole run.
         ImmutableArray<Bench> benches = site.Benches;
@@ -136,12 +147,11 @@ public static class BenchForecaster
         IEnclosure enclosure = EnclosureBuilder.Build(compiledSite);
         CompiledLightField field = LightFieldCompiler.Compile(compiledSite, enclosure, request.LightOptions);
 
-        Duration dt = request.Step ?? DefaultStep(plan.Lots.Select(l => l.Crop));
-        Instant earliest = plan.Lots.Count == 0 ? now : plan.Lots.Min(l => l.Start);
+        Instant earliest = plan.Lots.Min(l => l.Start);
         Duration spinUpStep = SpinUpStep(dt);
         var timeline = new ForecastTimeline(earliest, now, end, spinUpStep, dt, request.OutsideLight, request.Temperature, zone);
-        Instant hourFrom = plan.Lots.Count == 0 ? now : plan.Lots.Min(l => Min(l.Start, l.MeasuredAt));
-        Instant hourTo = plan.Lots.Count == 0 ? end : Max(end, plan.Lots.Max(l => Max(l.SaleAt, l.MeasuredAt)));
+        Instant hourFrom = plan.Lots.Min(l => Min(l.Start, l.MeasuredAt));
+        Instant hourTo = Max(end, plan.Lots.Max(l => Max(l.SaleAt, l.MeasuredAt)));
         var hourly = new ForecastTimeline(hourFrom, now, hourTo, Duration.FromHours(1), Duration.FromHours(1), request.OutsideLight, request.Temperature, zone);
 
         var results = new BenchForecast[plan.Lots.Count];

@@ -58,4 +58,13 @@ public class BenchForecasterValidationTests
         Crop crop = TestCrop with { NutationPeriodHours = TestCrop.NutationPeriodHours with { Value = periodHours } };
         Assert.Equal(Math.Max(1, expectedMinutes), BenchForecaster.DefaultStep([crop]).TotalMinutes);
     }
+
+    [Fact]
+    public void A_site_without_lots_gives_an_empty_forecast()
+    {
+        Site site = Site(OpaqueNorthGlasshouse, [Bench("a", 3, 1, 2, 1.5, 4, 4)], []);
+        SiteForecast forecast = BenchForecaster.Run(Request(site));
+        Assert.Empty(forecast.Benches);
+        Assert.Equal(WinterNow + Duration.FromDays(7), forecast.HorizonEnd);
+    }
 }
