@@ -16,7 +16,7 @@ public class StemBenchmarks
     private readonly Vector3 _blue = Direction.FromAzimuthZenith(Angle.FromDegrees(200), Angle.FromDegrees(60)) * 40;
 
     /// <summary>Growth-zone segments.</summary>
-    [Params(8)]
+    [Params(1, 8)]
     public int Segments { get; set; }
 
     /// <summary>With delay and nutation (the full model) or without.</summary>

@@ -24,8 +24,9 @@ namespace CanopyAdvisor.Core.Plants;
 /// Bending: in every growth-zone segment, with ε̇ = Ė/L_gz,
 /// dκ/dt = ε̇ [ (β/L_gz) g⊥(t − τ_g) + (ν/L_gz) ℓ⊥ − γ κ ] + nutation, with g⊥ = ẑ − (ẑ·t̂)t̂ (sine law),
 /// ℓ⊥ = l̂ − (l̂·t̂)t̂, l̂ the direction of the net blue flux vector (toward the light), ν = β·M(I),
-/// M(I) = a·I^b, β = B·γ. The stimuli are sensed at each segment's midpoint tangent (taken with the curvature of the
-/// step start), which makes the steady shape the implicit-midpoint discretisation of the continuous one. Over a
+/// M(I) = a·I^b, β = B·γ. The stimuli are sensed at each segment's midpoint tangent, on the shape drawn at the end
+/// of the previous step (all segments at once), which makes the steady shape the implicit-midpoint discretisation of
+/// the continuous one. Over a
 /// step the stimuli are held and the linear equation is solved exactly (exp(−ε̇γ dt) relaxation toward the forced
 /// state, and the rotating nutation drive integrated exactly), so steps with ε̇γ dt ≥ 1 stay stable.
 /// </para>
@@ -36,18 +37,24 @@ namespace CanopyAdvisor.Core.Plants;
 /// </para>
 /// <para>
 /// Circumnutation: a curvature drive of constant magnitude D rotating about t̂ with angular speed
-/// σ·2π/P (σ = +1 counter-clockwise seen from above). D = (α/L_gz)·√((ε̇γ)² + ω²), which is the drive that makes
-/// the curvature of a straight, upright growth zone with only proprioception acting (no gravity, no light) settle to
-/// a rotating uniform curvature α/L_gz, that is an apex tilt oscillating with amplitude α. Gravitropism reduces it.
-/// Circumnutation is differential growth: it stops, like all bending, when Ė = 0, and its phase advances only while the
-/// stem grows, so a pause in growth leaves the curvature in step with the drive when growth resumes. At the first
-/// growing step the growth zone is put into the drive's periodic state (see <c>StartNutation</c>), so no start-up
-/// transient is frozen into the stem.
+/// ω = σ·2π/P (σ = +1 counter-clockwise seen from above), relaxed by proprioception like any curvature:
+/// dκ_n/dt = −ε̇γ κ_n + D e^{iωt}. The model is linear in κ, so this part is kept apart from the tropic curvature
+/// (one value, uniform over the growth zone, in the segments' own frames) and the growth zone is drawn and sensed with
+/// the sum. D = (α/L_gz)·√((ε̇γ)² + ω²) makes |κ_n| = α/L_gz in the periodic state, a uniform arc whose apex tangent
+/// tilts by α (an arc turns its tangent by κL): with nothing else acting the apex circles with tilt α (between
+/// α(1 − 1/N) and α while growing, because the maturing basal segment fades out of it). Gravitropism sensing that tilt
+/// (with its delay) adds to or reduces it. Circumnutation is differential growth: it stops, like all bending, when
+/// Ė = 0, and its phase advances only while the stem grows. At the first growing step κ_n starts in its periodic state
+/// (see <c>StartNutation</c>). Matured segments keep only the tropic curvature: the helix circumnutation leaves in
+/// real stems has a pitch of a few millimetres and a negligible radius, while freezing whole segments at one phase
+/// of it would build a false lean whenever the freeze interval is a multiple of the period.
 /// </para>
 /// <para>
 /// Lengthening: length Ė·dt is added at the apex; it grows straight along the apex tangent until a whole ds has
 /// been added, then the basal growth-zone segment matures (freezes) and a new straight segment starts at the apex,
-/// so the growth zone slides toward the apex and the geometry stays continuous.
+/// so the growth zone slides toward the apex and the geometry stays continuous. The basal segment is drawn, and
+/// frozen, with the growth-weighted mean of its curvature since it became basal (material passes out of the growth
+/// zone continuously), which keeps circumnutation from being locked into the matured stem as a false lean.
 /// </para>
 /// <para>Not thread-safe; deterministic; <see cref="Clone"/> is a deep copy. <see cref="Step"/> allocates nothing.</para>
 /// </remarks>
@@ -74,6 +81,10 @@ public sealed class Stem
     private double[] _kv;
     private double[] _hs; // sinc(θ/2) of each segment's curvature at the last transport
     private double[] _omc; // (1 − cos(θ/2))/(θ/2)² likewise
+    private double[] _ch; // cos(θ/2) likewise
+    private double[] _drawnU; // the curvature each segment was drawn with at the last walk (tropic + nutation)
+    private double[] _drawnV;
+    private double[] _frames; // each segment's start frame (t̂, u, v) at the last walk, 9 per segment
     private Vector3[] _nodes; // growth-zone node positions, logical order, node 0 = growth-zone base
     private double[] _historyTimes;
     private double[] _history; // [(slot * n + storage) * 2 + 0/1]
@@ -98,6 +109,11 @@ public sealed class Stem
     private int _historyNewest = -1;
     private int _polylineCount;
     private bool _nutating;
+    private double _nutationU; // the nutation's curvature, uniform over the growth zone, in the segments' own frames
+    private double _nutationV;
+    private double _basalSumU; // growth-weighted sums of the maturing basal segment's curvature
+    private double _basalSumV;
+    private double _basalWeight; // metres grown since it became basal
     private double _lastLambda = double.NaN;
     private double _lastH = double.NaN;
     private double _lastDecay;
@@ -125,8 +141,13 @@ public sealed class Stem
         _kv = new double[_n];
         _hs = new double[_n];
         _omc = new double[_n];
+        _ch = new double[_n];
+        _drawnU = new double[_n];
+        _drawnV = new double[_n];
+        _frames = new double[_n * 9];
         Array.Fill(_hs, 1.0);
         Array.Fill(_omc, 0.5);
+        Array.Fill(_ch, 1.0);
         _nodes = new Vector3[_n + 1];
         _historyTimes = new double[HistoryCapacity];
         _history = new double[HistoryCapacity * _n * 2];
@@ -140,8 +161,9 @@ public sealed class Stem
         _polyline[1] = _base;
         _polylineCount = 2;
 
-        // Record the initial stimulus as the whole past (h = 0 leaves the curvature unchanged).
-        Walk(bend: true, 0, 0, Vector3.Zero, 0);
+        // Draw the stem, then record the initial stimulus as the whole past (h = 0 leaves the curvature unchanged).
+        Walk(bend: false, 0, 0, Vector3.Zero, 0, 0);
+        Walk(bend: true, 0, 0, Vector3.Zero, 0, 0);
     }
 
     /// <summary>The parameters this stem was created with.</summary>
@@ -272,6 +294,12 @@ public sealed class Stem
         // Curvature and the delayed stimulus are stored in the segments' own frames, which turned with the base
         // frame above; re-orthonormalise to keep rounding from accumulating over many rotations.
         Orthonormalise();
+        for (int f = 0; f < _frames.Length; f += 3)
+        {
+            double x = _frames[f], y = _frames[f + 1];
+            _frames[f] = (x * c) + (y * s);
+            _frames[f + 1] = (-x * s) + (y * c);
+        }
     }
 
     /// <summary>A deep copy that evolves independently.</summary>
@@ -282,6 +310,10 @@ public sealed class Stem
         copy._kv = (double[])_kv.Clone();
         copy._hs = (double[])_hs.Clone();
         copy._omc = (double[])_omc.Clone();
+        copy._ch = (double[])_ch.Clone();
+        copy._drawnU = (double[])_drawnU.Clone();
+        copy._drawnV = (double[])_drawnV.Clone();
+        copy._frames = (double[])_frames.Clone();
         copy._nodes = (Vector3[])_nodes.Clone();
         copy._historyTimes = (double[])_historyTimes.Clone();
         copy._history = (double[])_history.Clone();
@@ -321,9 +353,8 @@ public sealed class Stem
                 lightDir = blue / intensity;
             }
 
-            Walk(bend: true, h, epsDot, lightDir, nu);
+            Walk(bend: true, h, epsDot, lightDir, nu, lengthen ? elongation * h : 0);
         }
-
 
         _timeH += h;
         if (lengthen && elongation > 0)
@@ -338,7 +369,7 @@ public sealed class Stem
                 }
 
                 Orthonormalise();
-                Walk(bend: false, 0, 0, Vector3.Zero, 0);
+                Walk(bend: false, 0, 0, Vector3.Zero, 0, 0);
             }
             else
             {
@@ -351,7 +382,7 @@ public sealed class Stem
     /// One pass from the growth-zone base to the apex: senses, bends (when asked), carries the frame and sums the
     /// positions. Allocation-free; about 60 flops per segment.
     /// </summary>
-    private void Walk(bool bend, double h, double epsDot, Vector3 lightDir, double nu)
+    private void Walk(bool bend, double h, double epsDot, Vector3 lightDir, double nu, double grownM)
     {
         double decay = 1, gain = 0, nutU = 0, nutV = 0, cGravity = 0, cLight = 0;
         int pushSlot = -1, read0 = -1, read1 = -1;
@@ -388,6 +419,9 @@ public sealed class Stem
                     StartNutation(drive, lambda);
                 }
 
+                _nutationU = (_nutationU * decay) + nutU;
+                _nutationV = (_nutationV * decay) + nutV;
+
                 AdvancePhase(h);
             }
 
@@ -397,43 +431,59 @@ public sealed class Stem
             }
         }
 
-        // Scalars and local array references keep the loop in registers (this loop is the forecast's hot path).
-        double tx = _tb.X, ty = _tb.Y, tz = _tb.Z, ux = _ub.X, uy = _ub.Y, uz = _ub.Z, vx = _vb.X, vy = _vb.Y, vz = _vb.Z;
-        double px = _base.X, py = _base.Y, pz = _base.Z;
+        // Two passes. Pass 1 senses with each segment's frame from the last walk (stored), updates the curvature and
+        // evaluates the arc functions: no dependency between segments, so the work overlaps. Pass 2 carries the frame
+        // from base to apex, a short dependent chain per segment. (One fused pass was twice as slow: every segment
+        // waited for the one below.)
+        double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, quarterDs2 = 0.25 * ds * ds;
+        // The nutation bends the basal segment only over its part not yet matured, so it fades out continuously.
+        double basalNutationWeight = Math.Max(0, 1 - (_extra / _ds));
         double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
-        double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, halfDsSq2 = 0.5 * ds * ds;
-        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, history = _history;
-        Vector3[] nodes = _nodes;
+        double nutNewU = _nutationU, nutNewV = _nutationV;
+        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, chArray = _ch, history = _history;
+        double[] drawnU = _drawnU, drawnV = _drawnV, frames = _frames;
         int n = _n, head = _head;
-        nodes[0] = _base;
-        for (int i = 0; i < n; i++)
+        for (int s = 0; s < n; s++)
         {
-            int s = head + i;
-            if (s >= n)
+            bool basal = s == head;
+            double ku = kuArray[s], kv = kvArray[s];
+            double gku = ku, gkv = kv; // the tropic curvature drawn (differs from the state only in the maturing basal segment)
+            double nutWeight = 1;
+            if (basal)
             {
-                s -= n;
+                nutWeight = basalNutationWeight;
+                if (_basalWeight > 0)
+                {
+                    gku = _basalSumU / _basalWeight;
+                    gkv = _basalSumV / _basalWeight;
+                }
             }
 
-            double ku = kuArray[s], kv = kvArray[s];
             if (bend)
             {
+                int f = s * 9;
+                double tx = frames[f], ty = frames[f + 1], tz = frames[f + 2];
+                double ux = frames[f + 3], uy = frames[f + 4], uz = frames[f + 5];
+                double vx = frames[f + 6], vy = frames[f + 7], vz = frames[f + 8];
+                double sku = drawnU[s], skv = drawnV[s]; // the curvature as drawn at the last walk
+
                 // Stimuli at the segment's midpoint tangent: turn the start-frame components by x = θ/2 in the bending
                 // plane, g += adj·κ with adj·|κ| = (cos x − 1)(g·κ̂) − sin x (g·t̂), without dividing by |κ|. The
-                // half-angle functions of the current κ were kept from the last transport.
+                // arc functions of the drawn κ were kept from the last walk.
                 double sinOverKm = hsArray[s] * halfDs; // sin(x)/|κ|
                 double cosMinusOneOverKm2 = -omcArray[s] * halfDs2; // (cos x − 1)/|κ|²
                 double gu = uz, gv = vz, lu = 0, lv = 0;
-                double adj = (cosMinusOneOverKm2 * ((gu * ku) + (gv * kv))) - (sinOverKm * tz);
-                gu += adj * ku;
-                gv += adj * kv;
+                double adj = (cosMinusOneOverKm2 * ((gu * sku) + (gv * skv))) - (sinOverKm * tz);
+                gu += adj * sku;
+                gv += adj * skv;
                 if (cLight != 0)
                 {
                     lu = (lx * ux) + (ly * uy) + (lz * uz);
                     lv = (lx * vx) + (ly * vy) + (lz * vz);
                     double lt = (lx * tx) + (ly * ty) + (lz * tz);
-                    double adjLight = (cosMinusOneOverKm2 * ((lu * ku) + (lv * kv))) - (sinOverKm * lt);
-                    lu += adjLight * ku;
-                    lv += adjLight * kv;
+                    double adjLight = (cosMinusOneOverKm2 * ((lu * sku) + (lv * skv))) - (sinOverKm * lt);
+                    lu += adjLight * sku;
+                    lv += adjLight * skv;
                 }
 
                 if (read0 >= 0)
@@ -450,40 +500,90 @@ public sealed class Stem
                     gv = history[r0 + 1] + (readWeight * (history[r1 + 1] - history[r0 + 1]));
                 }
 
-                ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain) + nutU;
-                kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain) + nutV;
+                ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain);
+                kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain);
                 kuArray[s] = ku;
                 kvArray[s] = kv;
+                if (!basal)
+                {
+                    gku = ku;
+                    gkv = kv;
+                }
+                else if (grownM > 0)
+                {
+                    // The basal segment matures bit by bit as it is passed by growth: its drawn (and finally frozen)
+                    // curvature is the growth-weighted mean since it became basal. Freezing the instantaneous value
+                    // instead would lock the state of one moment into every matured segment.
+                    _basalSumU += ku * grownM;
+                    _basalSumV += kv * grownM;
+                    _basalWeight += grownM;
+                    gku = _basalSumU / _basalWeight;
+                    gkv = _basalSumV / _basalWeight;
+                }
+                else if (_basalWeight == 0)
+                {
+                    gku = ku;
+                    gkv = kv;
+                }
             }
+
+            // The arc functions of the new drawn curvature, for the transport below and the next step's sensing.
+            double dku = gku + (nutWeight * nutNewU), dkv = gkv + (nutWeight * nutNewV);
+            drawnU[s] = dku;
+            drawnV[s] = dkv;
+            ArcFunctions(((dku * dku) + (dkv * dkv)) * quarterDs2, out chArray[s], out hsArray[s], out omcArray[s]);
+        }
+
+        double cx = _tb.X, cy = _tb.Y, cz = _tb.Z, ax = _ub.X, ay = _ub.Y, az = _ub.Z, bx = _vb.X, by = _vb.Y, bz = _vb.Z;
+        double px = _base.X, py = _base.Y, pz = _base.Z;
+        double halfDsSq2 = 0.5 * ds * ds;
+        Vector3[] nodes = _nodes;
+        nodes[0] = _base;
+        for (int i = 0; i < n; i++)
+        {
+            int s = head + i;
+            if (s >= n)
+            {
+                s -= n;
+            }
+
+            int f = s * 9;
+            frames[f] = cx;
+            frames[f + 1] = cy;
+            frames[f + 2] = cz;
+            frames[f + 3] = ax;
+            frames[f + 4] = ay;
+            frames[f + 5] = az;
+            frames[f + 6] = bx;
+            frames[f + 7] = by;
+            frames[f + 8] = bz;
 
             // Carry the frame through the arc: rotation by θ = |κ|ds about t̂ × κ̂, division-free (κ may be zero).
             // With x = θ/2: sin θ/|κ| = ds·sinc(x)·cos x, (1 − cos θ)/|κ|² = ds²·sinc²(x)/2.
+            double ku = drawnU[s], kv = drawnV[s], hs = hsArray[s];
             double km2 = (ku * ku) + (kv * kv);
-            HalfAngle(0.5 * Math.Sqrt(km2) * ds, out double ch, out double hs, out double omc);
-            hsArray[s] = hs;
-            omcArray[s] = omc;
-            double sinOverKmFull = ds * hs * ch;
+            double sinOverKmFull = ds * hs * chArray[s];
             double omc2 = halfDsSq2 * hs * hs;
-            double kx = (ku * ux) + (kv * vx), ky = (ku * uy) + (kv * vy), kz = (ku * uz) + (kv * vz);
-            px += (tx * sinOverKmFull) + (kx * omc2);
-            py += (ty * sinOverKmFull) + (ky * omc2);
-            pz += (tz * sinOverKmFull) + (kz * omc2);
+            double kx = (ku * ax) + (kv * bx), ky = (ku * ay) + (kv * by), kz = (ku * az) + (kv * bz);
+            px += (cx * sinOverKmFull) + (kx * omc2);
+            py += (cy * sinOverKmFull) + (ky * omc2);
+            pz += (cz * sinOverKmFull) + (kz * omc2);
             double ct = 1 - (omc2 * km2);
             double au = omc2 * ku, bu = sinOverKmFull * ku, av = omc2 * kv, bv = sinOverKmFull * kv;
-            ux -= (kx * au) + (tx * bu);
-            uy -= (ky * au) + (ty * bu);
-            uz -= (kz * au) + (tz * bu);
-            vx -= (kx * av) + (tx * bv);
-            vy -= (ky * av) + (ty * bv);
-            vz -= (kz * av) + (tz * bv);
-            tx = (tx * ct) + (kx * sinOverKmFull);
-            ty = (ty * ct) + (ky * sinOverKmFull);
-            tz = (tz * ct) + (kz * sinOverKmFull);
+            ax -= (kx * au) + (cx * bu);
+            ay -= (ky * au) + (cy * bu);
+            az -= (kz * au) + (cz * bu);
+            bx -= (kx * av) + (cx * bv);
+            by -= (ky * av) + (cy * bv);
+            bz -= (kz * av) + (cz * bv);
+            cx = (cx * ct) + (kx * sinOverKmFull);
+            cy = (cy * ct) + (ky * sinOverKmFull);
+            cz = (cz * ct) + (kz * sinOverKmFull);
             nodes[i + 1] = new Vector3(px, py, pz);
         }
 
-        _apexTangent = new Vector3(tx, ty, tz);
-        _apex = new Vector3(px + (tx * _extra), py + (ty * _extra), pz + (tz * _extra));
+        _apexTangent = new Vector3(cx, cy, cz);
+        _apex = new Vector3(px + (cx * _extra), py + (cy * _extra), pz + (cz * _extra));
     }
 
     /// <summary>Carries position and frame (t̂, u, v) through one arc of length ds and curvature κ = ku·u + kv·v.</summary>
@@ -511,15 +611,30 @@ public sealed class Stem
     }
 
     /// <summary>cos x, sin(x)/x and (1 − cos x)/x²; Taylor series for |x| &lt; 0.6 (error below 1e-12), the library otherwise.</summary>
+    /// <summary>cos x, sin(x)/x and (1 − cos x)/x² from x²: Taylor series below x = 0.6 (no square root), the library above.</summary>
     [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    private static void ArcFunctions(double x2, out double cos, out double sinc, out double oneMinusCosOverX2)
+    {
+        if (x2 < 0.36)
+        {
+            oneMinusCosOverX2 = 0.5 * (1 - (x2 * (1.0 / 12) * (1 - (x2 * (1.0 / 30) * (1 - (x2 * (1.0 / 56) * (1 - (x2 * (1.0 / 90)))))))));
+            cos = 1 - (x2 * oneMinusCosOverX2);
+            sinc = 1 - (x2 * (1.0 / 6) * (1 - (x2 * (1.0 / 20) * (1 - (x2 * (1.0 / 42) * (1 - (x2 * (1.0 / 72) * (1 - (x2 * (1.0 / 110))))))))));
+            return;
+        }
+
+        HalfAngle(Math.Sqrt(x2), out cos, out sinc, out oneMinusCosOverX2);
+    }
+
     private static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x < 0.6)
         {
             double x2 = x * x;
-            oneMinusCosOverX2 = 0.5 * (1 - (x2 / 12 * (1 - (x2 / 30 * (1 - (x2 / 56 * (1 - (x2 / 90))))))));
+            // Multiplications by reciprocals, not divisions: this runs once per segment per step.
+            oneMinusCosOverX2 = 0.5 * (1 - (x2 * (1.0 / 12) * (1 - (x2 * (1.0 / 30) * (1 - (x2 * (1.0 / 56) * (1 - (x2 * (1.0 / 90)))))))));
             cos = 1 - (x2 * oneMinusCosOverX2);
-            sinc = 1 - (x2 / 6 * (1 - (x2 / 20 * (1 - (x2 / 42 * (1 - (x2 / 72 * (1 - (x2 / 110)))))))));
+            sinc = 1 - (x2 * (1.0 / 6) * (1 - (x2 * (1.0 / 20) * (1 - (x2 * (1.0 / 42) * (1 - (x2 * (1.0 / 72) * (1 - (x2 * (1.0 / 110))))))))));
             return;
         }
 
@@ -529,8 +644,7 @@ public sealed class Stem
     }
 
     /// <summary>
-    /// Puts the growth zone into the periodic state of the nutation drive alone, D e^{iφ}/(λ + iω) added to every
-    /// segment (magnitude α/L_gz), as if the stem had been circumnutating before it was created. Starting from rest
+    /// Puts the nutation curvature into the periodic state of its drive, D e^{iφ}/(λ + iω) (magnitude α/L_gz), as if the stem had been circumnutating before it was created. Starting from rest
     /// instead would leave a non-rotating transient decaying over 1/(ε̇γ) (often days), which the maturing segments
     /// would freeze into a spurious permanent lean.
     /// </summary>
@@ -538,14 +652,8 @@ public sealed class Stem
     {
         _nutating = true;
         double den = (lambda * lambda) + (_omega * _omega);
-        double re = drive * ((_phaseCos * lambda) + (_phaseSin * _omega)) / den;
-        double im = drive * ((_phaseSin * lambda) - (_phaseCos * _omega)) / den;
-        for (int i = 0; i < _n; i++)
-        {
-            _ku[i] += re;
-            _kv[i] += im;
-            HalfAngle(0.5 * Math.Sqrt((_ku[i] * _ku[i]) + (_kv[i] * _kv[i])) * _ds, out _, out _hs[i], out _omc[i]);
-        }
+        _nutationU = drive * ((_phaseCos * lambda) + (_phaseSin * _omega)) / den;
+        _nutationV = drive * ((_phaseSin * lambda) - (_phaseCos * _omega)) / den;
     }
 
     private void SetRotor(double h)
@@ -621,7 +729,10 @@ public sealed class Stem
     {
         int s = _head;
         Vector3 t = _tb, u = _ub, v = _vb, p = _base;
-        Transport(ref t, ref u, ref v, ref p, _ku[s], _kv[s], _ds);
+        double ku = _basalWeight > 0 ? _basalSumU / _basalWeight : _ku[s];
+        double kv = _basalWeight > 0 ? _basalSumV / _basalWeight : _kv[s];
+        _basalSumU = _basalSumV = _basalWeight = 0;
+        Transport(ref t, ref u, ref v, ref p, ku, kv, _ds);
         _tb = t;
         _ub = u;
         _vb = v;
