@@ -14,8 +14,8 @@ namespace CanopyAdvisor.Benchmarks;
 /// <para>Measured 2026-12-02 on the shared 2-core machine (load average 2–3.5 from other work; 1 launch, 1 warm-up,
 /// 3 iterations): 100 / 200 / 400 benches took 0.42 / 0.68 / 1.38 s without the band and 0.59 / 1.08 / 2.23 s with
 /// it (67.5 MB and 93.6 MB allocated at 400). Of the 1.4 s at 400 benches about 0.5 s is the light-field compile
-/// (6,400 points × 840 lamps and the sky view) and about 0.35 s the 14-day spin-up (672 steps of 30 min); the 7-day
-/// horizon alone (1,008 steps × 6,400 stems) is about 0.5 s.</para>
+/// (6,400 points × 840 lamps and the sky view) and about 0.5 s the 14-day spin-up (672 steps of 30 min); the 7-day
+/// horizon alone (1,008 steps × 6,400 stems, with the hourly height projection) is about 0.45 s.</para>
 /// </remarks>
 [MemoryDiagnoser]
 [SimpleJob(launchCount: 1, warmupCount: 1, iterationCount: 3)]
