@@ -161,46 +161,72 @@ internal sealed class BenchRun
         }
     }
 
-    /// <summary>A rerun of single points with other parameters and the main run's elongation scaled; returns each point's
-    /// lean vector at the horizon end (averaged over the last nutation period).</summary>
-    public (double East, double North)[] RunPoints(
-        int[] points, StemParameters parameters, double startHeightM, int segments, double[] elongation, double scale)
+    /// <summary>Reruns of single points with other parameters and the main run's elongation scaled, all on the same light
+    /// (computed once per point and step); returns per variant each point's lean vector at the horizon end (averaged
+    /// over the variant's last nutation period).</summary>
+    public (double East, double North)[][] RunVariants(
+        int[] points, IReadOnlyList<(StemParameters Parameters, double Scale)> variants, double startHeightM, int segments, double[] elongation)
     {
         ForecastTimeline tl = _timeline;
-        int count = points.Length;
-        var stems = new Stem[count];
-        for (int i = 0; i < count; i++)
+        int count = points.Length, v = variants.Count;
+        var stems = new Stem[v][];
+        var samplers = new Sampler[v];
+        var east = new double[count];
+        var north = new double[count];
+        int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
+        for (int k = 0; k < v; k++)
         {
-            stems[i] = Stem.Upright(parameters, startHeightM, segments);
+            StemParameters parameters = variants[k].Parameters;
+            stems[k] = new Stem[count];
+            for (int i = 0; i < count; i++)
+            {
+                stems[k][i] = Stem.Upright(parameters, Math.Max(startHeightM, parameters.GrowthZoneLengthM), segments);
+            }
+
+            samplers[k] = new Sampler(count, tl, parameters.NutationPeriod);
+            Measure(stems[k], east, north, out _, out _);
+            samplers[k].Add(_firstEdge, east, north);
         }
 
         var light = new PointLight[1];
-        var east = new double[count];
-        var north = new double[count];
-        var sampler = new Sampler(count, tl, parameters.NutationPeriod);
-        int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
-        Measure(stems, east, north, out _, out _);
-        sampler.Add(_firstEdge, east, north);
+        var blue = new Vector3[count];
         for (int s = _firstEdge; s < tl.Count; s++)
         {
-            rotation = ApplyRotations(stems, rotation, tl.Edges[s + 1]);
-            Duration dt = tl.Steps[s];
-            double e = elongation[s] * scale;
+            for (int k = 0; k < v; k++)
+            {
+                ApplyRotations(stems[k], rotation, tl.Edges[s + 1]);
+            }
+
+            rotation = SkipRotationsBefore(tl.Edges[s + 1]);
             for (int i = 0; i < count; i++)
             {
                 _field.Step(tl.Outside[s], tl.LocalTimes[s], points[i], light);
-                stems[i].Step(dt, e, light[0].BlueVector);
+                blue[i] = light[0].BlueVector;
             }
 
-            Measure(stems, east, north, out _, out _);
-            sampler.Add(s + 1, east, north);
+            Duration dt = tl.Steps[s];
+            for (int k = 0; k < v; k++)
+            {
+                double e = elongation[s] * variants[k].Scale;
+                for (int i = 0; i < count; i++)
+                {
+                    stems[k][i].Step(dt, e, blue[i]);
+                }
+
+                Measure(stems[k], east, north, out _, out _);
+                samplers[k].Add(s + 1, east, north);
+            }
         }
 
-        sampler.Finish();
-        var result = new (double, double)[count];
-        for (int i = 0; i < count; i++)
+        var result = new (double, double)[v][];
+        for (int k = 0; k < v; k++)
         {
-            result[i] = (sampler.EndEast[i], sampler.EndNorth[i]);
+            samplers[k].Finish();
+            result[k] = new (double, double)[count];
+            for (int i = 0; i < count; i++)
+            {
+                result[k][i] = (samplers[k].EndEast[i], samplers[k].EndNorth[i]);
+            }
         }
 
         return result;

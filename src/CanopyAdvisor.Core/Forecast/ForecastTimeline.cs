@@ -11,17 +11,23 @@ namespace CanopyAdvisor.Core.Forecast;
 /// <remarks>Built on one thread; read-only afterwards, so benches may be run in parallel on it.</remarks>
 internal sealed class ForecastTimeline
 {
-    /// <summary>Builds a grid of steps of <paramref name="dt"/> that has an edge at <paramref name="anchor"/>, starts at or
-    /// before <paramref name="from"/> and ends exactly at <paramref name="to"/> (the last step shortened if needed).</summary>
+    /// <summary>Builds a grid that has an edge at <paramref name="anchor"/>, steps of <paramref name="dtBefore"/> from at or
+    /// before <paramref name="from"/> to the anchor and of <paramref name="dt"/> from the anchor to exactly
+    /// <paramref name="to"/> (the last step shortened if needed).</summary>
     public ForecastTimeline(
-        Instant from, Instant anchor, Instant to, Duration dt, IOutsideLightSource outside, ITemperatureSource temperature,
-        DateTimeZone zone)
+        Instant from, Instant anchor, Instant to, Duration dtBefore, Duration dt, IOutsideLightSource outside,
+        ITemperatureSource temperature, DateTimeZone zone)
     {
-        long before = (long)Math.Ceiling((anchor - from).TotalTicks / (double)dt.TotalTicks);
+        long before = (long)Math.Ceiling((anchor - from).TotalTicks / (double)dtBefore.TotalTicks);
         before = Math.Max(0, before);
-        Instant start = anchor - (dt * before);
+        Instant start = anchor - (dtBefore * before);
         var edges = new List<Instant>();
-        for (Instant t = start; t < to; t += dt)
+        for (Instant t = start; t < anchor; t += dtBefore)
+        {
+            edges.Add(t);
+        }
+
+        for (Instant t = anchor; t < to; t += dt)
         {
             edges.Add(t);
         }

@@ -9,10 +9,13 @@ namespace CanopyAdvisor.Core.Light;
 /// A bench top (where the pots stand, at <see cref="Bench.SurfaceHeightM"/>) lets no light through, so light from a lamp
 /// over one tier does not reach the tier below, and a point below a bench sees no sky through it. Rays are tested
 /// against the plane of each bench top and the footprint rectangle; benches outside the height range of a ray cost one
-/// comparison. Immutable and thread-safe.
+/// comparison, and a ray or segment that stays at or above the highest bench top costs one comparison in all (the common
+/// case of a single level of benches, where the per-bench loop made compile and step quadratic in the number of benches).
+/// Immutable and thread-safe.
 /// </remarks>
 internal sealed class BenchTops
 {
+    private readonly double _highest = double.NegativeInfinity;
     private readonly double[] _height, _cornerX, _cornerY, _axisX, _axisY, _acrossX, _acrossY, _length, _width;
 
     public BenchTops(ImmutableArray<Bench> benches)
@@ -31,6 +34,7 @@ internal sealed class BenchTops
         {
             Footprint f = benches[b].Footprint;
             _height[b] = benches[b].SurfaceHeightM;
+            _highest = Math.Max(_highest, _height[b]);
             _cornerX[b] = f.CornerXM;
             _cornerY[b] = f.CornerYM;
             _axisX[b] = f.AxisDirection.X;
@@ -46,6 +50,11 @@ internal sealed class BenchTops
     public bool BlocksSegment(Vector3 from, Vector3 to)
     {
         double low = Math.Min(from.Z, to.Z), high = Math.Max(from.Z, to.Z);
+        if (low >= _highest)
+        {
+            return false;
+        }
+
         double dz = to.Z - from.Z;
         for (int b = 0; b < _height.Length; b++)
         {
@@ -68,7 +77,7 @@ internal sealed class BenchTops
     /// <summary>Whether a bench top lies across the upward ray from a point (directions with no upward part are never blocked here).</summary>
     public bool BlocksRay(Vector3 origin, Vector3 direction)
     {
-        if (direction.Z <= 0)
+        if (direction.Z <= 0 || origin.Z >= _highest)
         {
             return false;
         }

@@ -58,4 +58,27 @@ public class BenchForecasterValidationTests
         Crop crop = TestCrop with { NutationPeriodHours = TestCrop.NutationPeriodHours with { Value = periodHours } };
         Assert.Equal(Math.Max(1, expectedMinutes), BenchForecaster.DefaultStep([crop]).TotalMinutes);
     }
+
+    [Fact]
+    public void A_site_without_lots_gives_an_empty_forecast()
+    {
+        Site site = Site(OpaqueNorthGlasshouse, [Bench("a", 3, 1, 2, 1.5, 4, 4)], []);
+        SiteForecast forecast = BenchForecaster.Run(Request(site));
+        Assert.Empty(forecast.Benches);
+        Assert.Equal(WinterNow + Duration.FromDays(7), forecast.HorizonEnd);
+    }
+
+    [Fact]
+    public void Gaps_in_the_outside_light_are_counted_not_invented()
+    {
+        // Missing data are reported, never filled in (ARCHITECTURE.md: bad input never half-computes silently): a log
+        // gap of exactly one day at 10-minute steps is 144 steps; the lamps in the room keep the plants lit.
+        Site site = Site(Room, [Bench("b", 3.5, 3.5, 3, 3, 3, 3)], UniformLampGrid(), Lot("b", WinterNow));
+        var gap = new CanopyAdvisor.Core.Tests.Light.GappyOutsideLight(WinterNow + Duration.FromDays(1), WinterNow + Duration.FromDays(2));
+        SiteForecast forecast = BenchForecaster.Run(
+            Request(site, gap, new ConstantTemperature(20)) with { Step = Duration.FromMinutes(10), IncludeUncertainty = false });
+        Assert.Equal(144, forecast.MissingLightSteps);
+        Assert.Equal(0, forecast.MissingTemperatureSteps);
+        Assert.True(Assert.Single(forecast.Benches).MeanDliMolPerM2Day > 0);
+    }
 }
