@@ -3,8 +3,8 @@ using System.Globalization;
 using CanopyAdvisor.Core;
 using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Logs;
 using NodaTime;
-using NodaTime.Text;
 
 namespace CanopyAdvisor.Files.Temperature;
 
@@ -28,7 +28,7 @@ namespace CanopyAdvisor.Files.Temperature;
 public static class TemperatureLogReader
 {
     /// <summary>Name of the timestamp column.</summary>
-    public const string TimestampColumn = "timestamp";
+    public const string TimestampColumn = TimestampedCsv.TimestampColumn;
 
     /// <summary>Name of the air temperature column, °C.</summary>
     public const string AirColumn = "airC";
@@ -38,12 +38,6 @@ public static class TemperatureLogReader
 
     /// <summary>Both neighbours must lie within this time of the reading for the spike test (30 min).</summary>
     public static Duration SpikeWindow { get; } = Duration.FromMinutes(30);
-
-    private static readonly IPattern<OffsetDateTime> TimestampPattern = new CompositePatternBuilder<OffsetDateTime>
-    {
-        { OffsetDateTimePattern.ExtendedIso, _ => true },
-        { OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<G>"), _ => false },
-    }.Build();
 
     /// <summary>Reads a log file; errors name the file by its file name.</summary>
     /// <exception cref="InvalidInputException">The file has one or more bad rows or a bad header; every problem is listed.</exception>
@@ -65,85 +59,26 @@ public static class TemperatureLogReader
     /// <exception cref="InvalidInputException">The input has one or more bad rows or a bad header; every problem is listed.</exception>
     public static TemperatureLog Read(TextReader reader, string fileName)
     {
-        ArgumentNullException.ThrowIfNull(reader);
-        var errors = new List<ValidationError>();
-        var rows = new List<Row>();
-        Header? header = null;
-        Instant? previous = null;
-        int previousLine = 0;
-        int lineNumber = 0;
-        for (string? line = reader.ReadLine(); line is not null; line = reader.ReadLine())
-        {
-            lineNumber++;
-            string content = lineNumber == 1 ? line.TrimStart('\uFEFF') : line;
-            if (string.IsNullOrWhiteSpace(content) || content.TrimStart().StartsWith('#'))
-            {
-                continue;
-            }
-
-            string[] fields = [.. content.Split(',').Select(f => f.Trim())];
-            string where = $"{fileName}:{lineNumber}";
-            if (header is null)
-            {
-                header = Header.Parse(fields, where, errors);
-                if (header is null)
-                {
-                    throw new InvalidInputException(errors);
-                }
-
-                continue;
-            }
-
-            if (fields.Length != header.FieldCount)
-            {
-                errors.Add(new ValidationError(where, $"expected {header.FieldCount} fields, found {fields.Length}"));
-                continue;
-            }
-
-            Instant? time = ParseTimestamp(fields[header.Timestamp], where, errors);
-            double? air = ParseAir(fields[header.Air], where, errors);
-            if (time is not { } t)
-            {
-                continue;
-            }
-
-            if (previous is { } before && t <= before)
-            {
-                errors.Add(new ValidationError(where, $"{TimestampColumn}: not after the previous row (line {previousLine})"));
-            }
-
-            previous = t;
-            previousLine = lineNumber;
-            rows.Add(new Row(where, t, air));
-        }
-
-        if (header is null)
-        {
-            errors.Add(new ValidationError(fileName, $"empty: expected a header row with {TimestampColumn} and {AirColumn}"));
-        }
-        else if (rows.Count == 0 && errors.Count == 0)
-        {
-            errors.Add(new ValidationError(fileName, "no data rows"));
-        }
-
-        if (errors.Count > 0)
-        {
-            throw new InvalidInputException(errors);
-        }
-
+        List<TimestampedRow<double?>> rows = TimestampedCsv.Read(
+            reader,
+            fileName,
+            [AirColumn],
+            present => present[0] ? null : $"missing column {AirColumn}",
+            $"empty: expected a header row with {TimestampColumn} and {AirColumn}",
+            (values, where, errors) => values[0] is string air ? ParseAir(air, where, errors) : null);
         ImmutableArray<TemperatureSpike> spikes = FindSpikes(rows);
         var spikeTimes = new HashSet<Instant>(spikes.Select(s => s.Time));
         ImmutableArray<TemperatureRecord> records =
-            [.. rows.Select(r => new TemperatureRecord(r.Time, spikeTimes.Contains(r.Time) ? null : r.AirC))];
+            [.. rows.Select(r => new TemperatureRecord(r.Time, spikeTimes.Contains(r.Time) ? null : r.Values))];
         return new TemperatureLog(records, spikes);
     }
 
-    private static ImmutableArray<TemperatureSpike> FindSpikes(List<Row> rows)
+    private static ImmutableArray<TemperatureSpike> FindSpikes(List<TimestampedRow<double?>> rows)
     {
         var spikes = ImmutableArray.CreateBuilder<TemperatureSpike>();
         for (int i = 1; i < rows.Count - 1; i++)
         {
-            if (rows[i - 1].AirC is not { } before || rows[i].AirC is not { } value || rows[i + 1].AirC is not { } after)
+            if (rows[i - 1].Values is not { } before || rows[i].Values is not { } value || rows[i + 1].Values is not { } after)
             {
                 continue;
             }
@@ -162,22 +97,6 @@ public static class TemperatureLogReader
         }
 
         return spikes.ToImmutable();
-    }
-
-    private static Instant? ParseTimestamp(string field, string where, List<ValidationError> errors)
-    {
-        ParseResult<OffsetDateTime> result = TimestampPattern.Parse(field);
-        if (result.Success)
-        {
-            return result.Value.ToInstant();
-        }
-
-        errors.Add(new ValidationError(
-            where,
-            field.Length == 0
-                ? $"{TimestampColumn}: missing"
-                : $"{TimestampColumn}: not an ISO-8601 date-time with UTC offset (e.g. 2026-03-01T12:00:00+01:00)"));
-        return null;
     }
 
     private static double? ParseAir(string field, string where, List<ValidationError> errors)
@@ -203,40 +122,5 @@ public static class TemperatureLogReader
         }
 
         return value;
-    }
-
-    private sealed record Row(string Where, Instant Time, double? AirC);
-
-    private sealed record Header(int FieldCount, int Timestamp, int Air)
-    {
-        public static Header? Parse(string[] names, string where, List<ValidationError> errors)
-        {
-            int before = errors.Count;
-            var seen = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
-            foreach (string name in names)
-            {
-                if (name.Length > 0 && !seen.Add(name))
-                {
-                    errors.Add(new ValidationError(where, $"header: column {name} appears twice"));
-                }
-            }
-
-            int timestamp = IndexOf(names, TimestampColumn);
-            int air = IndexOf(names, AirColumn);
-            if (timestamp < 0)
-            {
-                errors.Add(new ValidationError(where, $"header: missing column {TimestampColumn}"));
-            }
-
-            if (air < 0)
-            {
-                errors.Add(new ValidationError(where, $"header: missing column {AirColumn}"));
-            }
-
-            return errors.Count > before ? null : new Header(names.Length, timestamp, air);
-        }
-
-        private static int IndexOf(string[] names, string column) =>
-            Array.FindIndex(names, n => string.Equals(n, column, StringComparison.OrdinalIgnoreCase));
     }
 }
