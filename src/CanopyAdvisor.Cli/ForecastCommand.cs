@@ -9,6 +9,7 @@ using CanopyAdvisor.Core.Validation;
 using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Temperature;
 using CanopyAdvisor.Files.Weather;
+using CanopyAdvisor.Reports;
 using NodaTime;
 using NodaTime.Text;
 
@@ -29,9 +30,10 @@ internal static class ForecastCommand
         Option<string[]> crops = CropsCommand.CropFoldersOption();
         var noBand = new Option<bool>("--no-band") { Description = "Skip the uncertainty band (faster)." };
         var json = new Option<bool>("--json") { Description = "Print JSON instead of a table." };
+        var map = new Option<string?>("--map") { Description = "Also write a floor map (SVG) of each plant's lean at the horizon with a lean arrow per bench." };
         var command = new Command("forecast", "Per bench: lean now and at the horizon, direction, rate, when it leaves grade, height at sale, and flags.")
         {
-            site, days, now, weather, temperatures, crops, noBand, json,
+            site, days, now, weather, temperatures, crops, noBand, json, map,
         };
         command.SetAction(parse =>
         {
@@ -92,6 +94,12 @@ internal static class ForecastCommand
             SiteForecast forecast = BenchForecaster.Run(request, progress);
 
             ForecastReport report = Build(model, forecast, weatherPath, temperaturePath);
+            if (parse.GetValue(map) is string mapPath)
+            {
+                File.WriteAllText(mapPath, LeanMapSvg.Render(model, forecast, $"{model.Name}: lean forecast to {report.HorizonEnd}"));
+                error.WriteLine($"map written to {mapPath}");
+            }
+
             if (parse.GetValue(json))
             {
                 JsonOutput.Write(output, report);
