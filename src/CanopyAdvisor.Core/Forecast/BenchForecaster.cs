@@ -63,7 +63,9 @@ namespace CanopyAdvisor.Core.Forecast;
 /// step and the light at its midpoint; the baseline of the shifts is then a rerun of the crop's own parameters on that
 /// grid, so the step error largely cancels. Accuracy trade-off, measured on the tests' three-bench winter glasshouse
 /// (52° N, December, 10-minute steps, leans 21–23°, band 7.4° to 40.4°): the band's ends moved by at most 0.094° and
-/// the ends of each driver by at most 0.094° against reruns at the forecast step, at about 0.68 of their cost. Cost: 2 points
+/// the ends of each driver by at most 0.094° against reruns at the forecast step; on the first 60 benches of the
+/// forecast benchmark scene (petunia, basil, poinsettia) by at most 0.072°; all at about 0.68 of their cost. (A 60-minute
+/// band step moved them by up to 0.21° there, and reruns on the centre point alone by up to 0.24°: both rejected.) Cost: 2 points
 /// × 2 ends × keys stems per bench beside the bench's own (16 more for 4 keys), plus 2 baseline stems on the coarser
 /// grid.</para>
 /// <para><b>Accuracy.</b> In the tests' winter glasshouse (bench by the south wall, 52° N, December) the step
