@@ -29,6 +29,9 @@ internal sealed class BenchRun
         _windowHours = nutationPeriod.TotalHours;
     }
 
+    /// <summary>The step grid this run steps over.</summary>
+    public ForecastTimeline Timeline => _timeline;
+
     // Outputs of the main run.
     public double[] NowEast = [], NowNorth = [], EndEast = [], EndNorth = [];
     public double[] ElongationPerStep = [];
