@@ -173,8 +173,8 @@ public class LightFieldCompilerTests
 
     // Howell's catalogue B-3 (MODEL.md §3): view factor from a point to a parallel rectangle 1 × 1 at height 1 with a
     // corner over the point, 0.138531606. An opaque square over the point's corner hides that share of the sky, so the
-    // sky view factor is 1 − 0.138532. Tolerance 5e-4: the 0.5° grid cells cut by the square's edges (error about
-    // 2e-5 with the interim grid, 1.6e-4 with the shared HemisphereQuadrature at 180 bands; about 0.008 at 10° cells).
+    // sky view factor is 1 − 0.138532. Tolerance 5e-4: the quadrature cells cut by the square's edges (measured error
+    // 1.6e-4 with HemisphereQuadrature at 180 bands; about 0.008 at 10° cells).
     [Fact]
     public void Sky_view_factor_misses_an_opaque_square_as_in_howell_b3()
     {
