@@ -118,6 +118,9 @@ public sealed class Stem
     private double _lastH = double.NaN;
     private double _lastDecay;
     private double _lastGain;
+    private double _lastDrive; // nutation drive D and its step coefficients (e^{iωh} − e^{−λh})/(λ + iω), kept with λ, dt
+    private double _lastNutRe;
+    private double _lastNutIm;
     private double _lastIntensity = double.NaN;
     private double _lastRatio;
 
@@ -397,6 +400,16 @@ public sealed class Stem
                 _lastH = h;
                 _lastDecay = Math.Exp(-lambda * h);
                 _lastGain = lambda * h > 1e-9 ? (1 - _lastDecay) / lambda : h;
+                if (_nutationAmplitude != 0 && h > 0)
+                {
+                    // The nutation drive's coefficients depend only on λ and dt too (a square root and two divisions).
+                    SetRotor(h);
+                    _lastDrive = (_nutationAmplitude / _gz) * Math.Sqrt((lambda * lambda) + (_omega * _omega));
+                    double numRe = _rotorCos - _lastDecay, numIm = _rotorSin;
+                    double den = (lambda * lambda) + (_omega * _omega);
+                    _lastNutRe = ((numRe * lambda) + (numIm * _omega)) / den;
+                    _lastNutIm = ((numIm * lambda) - (numRe * _omega)) / den;
+                }
             }
 
             decay = _lastDecay;
@@ -406,12 +419,7 @@ public sealed class Stem
             if (_nutationAmplitude != 0 && h > 0)
             {
                 // Exact integral of D e^{i(φ0 + ωt)} against e^{−λ(h−t)}: D e^{iφ0} (e^{iωh} − e^{−λh}) / (λ + iω).
-                SetRotor(h);
-                double drive = (_nutationAmplitude / _gz) * Math.Sqrt((lambda * lambda) + (_omega * _omega));
-                double numRe = _rotorCos - decay, numIm = _rotorSin;
-                double den = (lambda * lambda) + (_omega * _omega);
-                double cRe = ((numRe * lambda) + (numIm * _omega)) / den;
-                double cIm = ((numIm * lambda) - (numRe * _omega)) / den;
+                double drive = _lastDrive, cRe = _lastNutRe, cIm = _lastNutIm;
                 nutU = drive * ((_phaseCos * cRe) - (_phaseSin * cIm));
                 nutV = drive * ((_phaseCos * cIm) + (_phaseSin * cRe));
                 if (!_nutating)
