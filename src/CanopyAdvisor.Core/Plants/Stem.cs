@@ -125,6 +125,8 @@ public sealed class Stem
     private double _lastH = double.NaN;
     private double _lastDecay;
     private double _lastGain;
+    private Duration _lastDt; // the last step and its length in hours (Duration.Zero ↔ 0 h initially)
+    private double _lastDtHours;
     private double _lastDrive; // nutation drive D and its step coefficients (e^{iωh} − e^{−λh})/(λ + iω), kept with λ, dt
     private double _lastNutRe;
     private double _lastNutIm;
@@ -325,7 +327,14 @@ public sealed class Stem
 
     private void Advance(Duration dt, double elongation, Vector3 blue, bool lengthen)
     {
-        double h = dt.TotalHours;
+        if (dt != _lastDt)
+        {
+            // Steps usually repeat with the same dt: Duration.TotalHours costs a division.
+            _lastDt = dt;
+            _lastDtHours = dt.TotalHours;
+        }
+
+        double h = _lastDtHours;
         if (!(h >= 0) || double.IsInfinity(h) || !(elongation >= 0) || double.IsInfinity(elongation)
             || !double.IsFinite(blue.X) || !double.IsFinite(blue.Y) || !double.IsFinite(blue.Z))
         {
@@ -460,7 +469,7 @@ public sealed class Stem
             if (basal)
             {
                 nutWeight = basalNutationWeight;
-                if (_basalWeight > 0)
+                if (_basalWeight > 0 && !(bend && grownM > 0)) // when bending with growth the mean is taken below
                 {
                     gku = _basalSumU / _basalWeight;
                     gkv = _basalSumV / _basalWeight;
