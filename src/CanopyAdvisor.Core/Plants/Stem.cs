@@ -71,6 +71,9 @@ public sealed class Stem
     private readonly int _n;
     private readonly double _ds;
     private readonly double _gz;
+    private readonly double _invGz; // 1/L_gz, 1/ds and β/L_gz: multiplications instead of divisions every step
+    private readonly double _invDs;
+    private readonly double _betaOverGz;
     private readonly double _gamma;
     private readonly double _beta;
     private readonly double _photoA;
@@ -139,8 +142,11 @@ public sealed class Stem
         _n = growthZoneSegments;
         _gz = parameters.GrowthZoneLengthM;
         _ds = _gz / _n;
+        _invGz = 1 / _gz;
+        _invDs = 1 / _ds;
         _gamma = parameters.ProprioceptiveSensitivity;
         _beta = parameters.BalanceNumber * parameters.ProprioceptiveSensitivity;
+        _betaOverGz = _beta / _gz;
         _photoA = parameters.PhotoCoefficient;
         _photoB = parameters.PhotoExponent;
         _delayH = parameters.GravitropicDelay.TotalHours;
@@ -346,7 +352,7 @@ public sealed class Stem
             return;
         }
 
-        double epsDot = elongation / _gz;
+        double epsDot = elongation * _invGz;
         if (epsDot > 0)
         {
             double intensity = blue.Length;
@@ -361,7 +367,7 @@ public sealed class Stem
                 }
 
                 nu = _beta * _lastRatio;
-                lightDir = blue / intensity;
+                lightDir = blue * (1 / intensity);
             }
 
             Walk(bend: true, h, epsDot, lightDir, nu, lengthen ? elongation * h : 0);
@@ -422,8 +428,8 @@ public sealed class Stem
 
             decay = _lastDecay;
             gain = _lastGain;
-            cGravity = epsDot * _beta / _gz;
-            cLight = epsDot * nu / _gz;
+            cGravity = epsDot * _betaOverGz;
+            cLight = epsDot * nu * _invGz;
             if (_nutationAmplitude != 0 && h > 0)
             {
                 // Exact integral of D e^{i(φ0 + ωt)} against e^{−λ(h−t)}: D e^{iφ0} (e^{iωh} − e^{−λh}) / (λ + iω).
@@ -453,7 +459,7 @@ public sealed class Stem
         // waited for the one below.)
         double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, quarterDs2 = 0.25 * ds * ds;
         // The nutation bends the basal segment only over its part not yet matured, so it fades out continuously.
-        double basalNutationWeight = Math.Max(0, 1 - (_extra / _ds));
+        double basalNutationWeight = Math.Max(0, 1 - (_extra * _invDs));
         double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
         double nutNewU = _nutationU, nutNewV = _nutationV;
         double[] history = _history;
@@ -533,8 +539,9 @@ public sealed class Stem
                     _basalSumU += ku * grownM;
                     _basalSumV += kv * grownM;
                     _basalWeight += grownM;
-                    gku = _basalSumU / _basalWeight;
-                    gkv = _basalSumV / _basalWeight;
+                    double inverseWeight = 1 / _basalWeight;
+                    gku = _basalSumU * inverseWeight;
+                    gkv = _basalSumV * inverseWeight;
                 }
                 else if (_basalWeight == 0)
                 {
