@@ -462,7 +462,7 @@ public sealed class Stem
         double basalNutationWeight = Math.Max(0, 1 - (_extra * _invDs));
         double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
         double nutNewU = _nutationU, nutNewV = _nutationV;
-        double[] history = _history;
+        ref double history0 = ref MemoryMarshal.GetArrayDataReference(_history);
         ref double seg0 = ref MemoryMarshal.GetArrayDataReference(_seg); // _seg holds n segments: no bounds checks below
         int n = _n, head = _head;
         for (int s = 0; s < n; s++)
@@ -510,16 +510,18 @@ public sealed class Stem
 
                 if (read0 >= 0)
                 {
+                    // Slots and segments are in range by construction (HistoryCapacity × n pairs).
                     if (pushSlot >= 0)
                     {
-                        int w = ((pushSlot * n) + s) * 2;
-                        history[w] = gu;
-                        history[w + 1] = gv;
+                        ref double w = ref Unsafe.Add(ref history0, ((pushSlot * n) + s) * 2);
+                        w = gu;
+                        Unsafe.Add(ref w, 1) = gv;
                     }
 
-                    int r0 = ((read0 * n) + s) * 2, r1 = ((read1 * n) + s) * 2;
-                    gu = history[r0] + (readWeight * (history[r1] - history[r0]));
-                    gv = history[r0 + 1] + (readWeight * (history[r1 + 1] - history[r0 + 1]));
+                    ref double h0 = ref Unsafe.Add(ref history0, ((read0 * n) + s) * 2);
+                    ref double h1 = ref Unsafe.Add(ref history0, ((read1 * n) + s) * 2);
+                    gu = h0 + (readWeight * (h1 - h0));
+                    gv = Unsafe.Add(ref h0, 1) + (readWeight * (Unsafe.Add(ref h1, 1) - Unsafe.Add(ref h0, 1)));
                 }
 
                 ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain);
