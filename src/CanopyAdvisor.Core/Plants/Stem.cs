@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Validation;
 using NodaTime;
@@ -69,6 +71,9 @@ public sealed class Stem
     private readonly int _n;
     private readonly double _ds;
     private readonly double _gz;
+    private readonly double _invGz; // 1/L_gz, 1/ds and β/L_gz: multiplications instead of divisions every step
+    private readonly double _invDs;
+    private readonly double _betaOverGz;
     private readonly double _gamma;
     private readonly double _beta;
     private readonly double _photoA;
@@ -77,14 +82,19 @@ public sealed class Stem
     private readonly double _omega; // signed angular speed of nutation, rad/h
     private readonly double _nutationAmplitude; // rad
 
-    private double[] _ku;
-    private double[] _kv;
-    private double[] _hs; // sinc(θ/2) of each segment's curvature at the last transport
-    private double[] _omc; // (1 − cos(θ/2))/(θ/2)² likewise
-    private double[] _ch; // cos(θ/2) likewise
-    private double[] _drawnU; // the curvature each segment was drawn with at the last walk (tropic + nutation)
-    private double[] _drawnV;
-    private double[] _frames; // each segment's start frame (t̂, u, v) at the last walk, 9 per segment
+    // Per-segment state, interleaved (SegmentStride doubles = two cache lines per segment, so a step touches few lines):
+    // [0..8] the segment's start frame (t̂, u, v) at the last walk; Ku, Kv the tropic curvature; Hs = sinc(θ/2),
+    // Omc = (1 − cos(θ/2))/(θ/2)², Ch = cos(θ/2) of the drawn curvature at the last transport; DrawnU, DrawnV the
+    // curvature each segment was drawn with at the last walk (tropic + nutation).
+    private const int SegmentStride = 16;
+    private const int Ku = 9;
+    private const int Kv = 10;
+    private const int Hs = 11;
+    private const int Omc = 12;
+    private const int Ch = 13;
+    private const int DrawnU = 14;
+    private const int DrawnV = 15;
+    private double[] _seg;
     private Vector3[] _nodes; // growth-zone node positions, logical order, node 0 = growth-zone base
     private double[] _historyTimes;
     private double[] _history; // [(slot * n + storage) * 2 + 0/1]
@@ -118,6 +128,11 @@ public sealed class Stem
     private double _lastH = double.NaN;
     private double _lastDecay;
     private double _lastGain;
+    private Duration _lastDt; // the last step and its length in hours (Duration.Zero ↔ 0 h initially)
+    private double _lastDtHours;
+    private double _lastDrive; // nutation drive D and its step coefficients (e^{iωh} − e^{−λh})/(λ + iω), kept with λ, dt
+    private double _lastNutRe;
+    private double _lastNutIm;
     private double _lastIntensity = double.NaN;
     private double _lastRatio;
 
@@ -127,8 +142,11 @@ public sealed class Stem
         _n = growthZoneSegments;
         _gz = parameters.GrowthZoneLengthM;
         _ds = _gz / _n;
+        _invGz = 1 / _gz;
+        _invDs = 1 / _ds;
         _gamma = parameters.ProprioceptiveSensitivity;
         _beta = parameters.BalanceNumber * parameters.ProprioceptiveSensitivity;
+        _betaOverGz = _beta / _gz;
         _photoA = parameters.PhotoCoefficient;
         _photoB = parameters.PhotoExponent;
         _delayH = parameters.GravitropicDelay.TotalHours;
@@ -137,17 +155,13 @@ public sealed class Stem
             ? parameters.NutationSense * 2 * Math.PI / parameters.NutationPeriod.TotalHours
             : 0;
 
-        _ku = new double[_n];
-        _kv = new double[_n];
-        _hs = new double[_n];
-        _omc = new double[_n];
-        _ch = new double[_n];
-        _drawnU = new double[_n];
-        _drawnV = new double[_n];
-        _frames = new double[_n * 9];
-        Array.Fill(_hs, 1.0);
-        Array.Fill(_omc, 0.5);
-        Array.Fill(_ch, 1.0);
+        _seg = new double[_n * SegmentStride];
+        for (int s = 0; s < _n; s++)
+        {
+            _seg[(s * SegmentStride) + Hs] = 1.0;
+            _seg[(s * SegmentStride) + Omc] = 0.5;
+            _seg[(s * SegmentStride) + Ch] = 1.0;
+        }
         _nodes = new Vector3[_n + 1];
         _historyTimes = new double[HistoryCapacity];
         _history = new double[HistoryCapacity * _n * 2];
@@ -294,11 +308,14 @@ public sealed class Stem
         // Curvature and the delayed stimulus are stored in the segments' own frames, which turned with the base
         // frame above; re-orthonormalise to keep rounding from accumulating over many rotations.
         Orthonormalise();
-        for (int f = 0; f < _frames.Length; f += 3)
+        for (int g = 0; g < _seg.Length; g += SegmentStride)
         {
-            double x = _frames[f], y = _frames[f + 1];
-            _frames[f] = (x * c) + (y * s);
-            _frames[f + 1] = (-x * s) + (y * c);
+            for (int f = g; f < g + 9; f += 3)
+            {
+                double x = _seg[f], y = _seg[f + 1];
+                _seg[f] = (x * c) + (y * s);
+                _seg[f + 1] = (-x * s) + (y * c);
+            }
         }
     }
 
@@ -306,14 +323,7 @@ public sealed class Stem
     public Stem Clone()
     {
         var copy = (Stem)MemberwiseClone();
-        copy._ku = (double[])_ku.Clone();
-        copy._kv = (double[])_kv.Clone();
-        copy._hs = (double[])_hs.Clone();
-        copy._omc = (double[])_omc.Clone();
-        copy._ch = (double[])_ch.Clone();
-        copy._drawnU = (double[])_drawnU.Clone();
-        copy._drawnV = (double[])_drawnV.Clone();
-        copy._frames = (double[])_frames.Clone();
+        copy._seg = (double[])_seg.Clone();
         copy._nodes = (Vector3[])_nodes.Clone();
         copy._historyTimes = (double[])_historyTimes.Clone();
         copy._history = (double[])_history.Clone();
@@ -323,7 +333,14 @@ public sealed class Stem
 
     private void Advance(Duration dt, double elongation, Vector3 blue, bool lengthen)
     {
-        double h = dt.TotalHours;
+        if (dt != _lastDt)
+        {
+            // Steps usually repeat with the same dt: Duration.TotalHours costs a division.
+            _lastDt = dt;
+            _lastDtHours = dt.TotalHours;
+        }
+
+        double h = _lastDtHours;
         if (!(h >= 0) || double.IsInfinity(h) || !(elongation >= 0) || double.IsInfinity(elongation)
             || !double.IsFinite(blue.X) || !double.IsFinite(blue.Y) || !double.IsFinite(blue.Z))
         {
@@ -335,7 +352,7 @@ public sealed class Stem
             return;
         }
 
-        double epsDot = elongation / _gz;
+        double epsDot = elongation * _invGz;
         if (epsDot > 0)
         {
             double intensity = blue.Length;
@@ -350,7 +367,7 @@ public sealed class Stem
                 }
 
                 nu = _beta * _lastRatio;
-                lightDir = blue / intensity;
+                lightDir = blue * (1 / intensity);
             }
 
             Walk(bend: true, h, epsDot, lightDir, nu, lengthen ? elongation * h : 0);
@@ -397,21 +414,26 @@ public sealed class Stem
                 _lastH = h;
                 _lastDecay = Math.Exp(-lambda * h);
                 _lastGain = lambda * h > 1e-9 ? (1 - _lastDecay) / lambda : h;
+                if (_nutationAmplitude != 0 && h > 0)
+                {
+                    // The nutation drive's coefficients depend only on λ and dt too (a square root and two divisions).
+                    SetRotor(h);
+                    _lastDrive = (_nutationAmplitude / _gz) * Math.Sqrt((lambda * lambda) + (_omega * _omega));
+                    double numRe = _rotorCos - _lastDecay, numIm = _rotorSin;
+                    double den = (lambda * lambda) + (_omega * _omega);
+                    _lastNutRe = ((numRe * lambda) + (numIm * _omega)) / den;
+                    _lastNutIm = ((numIm * lambda) - (numRe * _omega)) / den;
+                }
             }
 
             decay = _lastDecay;
             gain = _lastGain;
-            cGravity = epsDot * _beta / _gz;
-            cLight = epsDot * nu / _gz;
+            cGravity = epsDot * _betaOverGz;
+            cLight = epsDot * nu * _invGz;
             if (_nutationAmplitude != 0 && h > 0)
             {
                 // Exact integral of D e^{i(φ0 + ωt)} against e^{−λ(h−t)}: D e^{iφ0} (e^{iωh} − e^{−λh}) / (λ + iω).
-                SetRotor(h);
-                double drive = (_nutationAmplitude / _gz) * Math.Sqrt((lambda * lambda) + (_omega * _omega));
-                double numRe = _rotorCos - decay, numIm = _rotorSin;
-                double den = (lambda * lambda) + (_omega * _omega);
-                double cRe = ((numRe * lambda) + (numIm * _omega)) / den;
-                double cIm = ((numIm * lambda) - (numRe * _omega)) / den;
+                double drive = _lastDrive, cRe = _lastNutRe, cIm = _lastNutIm;
                 nutU = drive * ((_phaseCos * cRe) - (_phaseSin * cIm));
                 nutV = drive * ((_phaseCos * cIm) + (_phaseSin * cRe));
                 if (!_nutating)
@@ -437,22 +459,23 @@ public sealed class Stem
         // waited for the one below.)
         double ds = _ds, halfDs = 0.5 * _ds, halfDs2 = halfDs * halfDs, quarterDs2 = 0.25 * ds * ds;
         // The nutation bends the basal segment only over its part not yet matured, so it fades out continuously.
-        double basalNutationWeight = Math.Max(0, 1 - (_extra / _ds));
+        double basalNutationWeight = Math.Max(0, 1 - (_extra * _invDs));
         double lx = lightDir.X, ly = lightDir.Y, lz = lightDir.Z;
         double nutNewU = _nutationU, nutNewV = _nutationV;
-        double[] kuArray = _ku, kvArray = _kv, hsArray = _hs, omcArray = _omc, chArray = _ch, history = _history;
-        double[] drawnU = _drawnU, drawnV = _drawnV, frames = _frames;
+        ref double history0 = ref MemoryMarshal.GetArrayDataReference(_history);
+        ref double seg0 = ref MemoryMarshal.GetArrayDataReference(_seg); // _seg holds n segments: no bounds checks below
         int n = _n, head = _head;
         for (int s = 0; s < n; s++)
         {
             bool basal = s == head;
-            double ku = kuArray[s], kv = kvArray[s];
+            ref double g = ref Unsafe.Add(ref seg0, s * SegmentStride);
+            double ku = Unsafe.Add(ref g, Ku), kv = Unsafe.Add(ref g, Kv);
             double gku = ku, gkv = kv; // the tropic curvature drawn (differs from the state only in the maturing basal segment)
             double nutWeight = 1;
             if (basal)
             {
                 nutWeight = basalNutationWeight;
-                if (_basalWeight > 0)
+                if (_basalWeight > 0 && !(bend && grownM > 0)) // when bending with growth the mean is taken below
                 {
                     gku = _basalSumU / _basalWeight;
                     gkv = _basalSumV / _basalWeight;
@@ -461,17 +484,16 @@ public sealed class Stem
 
             if (bend)
             {
-                int f = s * 9;
-                double tx = frames[f], ty = frames[f + 1], tz = frames[f + 2];
-                double ux = frames[f + 3], uy = frames[f + 4], uz = frames[f + 5];
-                double vx = frames[f + 6], vy = frames[f + 7], vz = frames[f + 8];
-                double sku = drawnU[s], skv = drawnV[s]; // the curvature as drawn at the last walk
+                double tx = g, ty = Unsafe.Add(ref g, 1), tz = Unsafe.Add(ref g, 2);
+                double ux = Unsafe.Add(ref g, 3), uy = Unsafe.Add(ref g, 4), uz = Unsafe.Add(ref g, 5);
+                double vx = Unsafe.Add(ref g, 6), vy = Unsafe.Add(ref g, 7), vz = Unsafe.Add(ref g, 8);
+                double sku = Unsafe.Add(ref g, DrawnU), skv = Unsafe.Add(ref g, DrawnV); // the curvature as drawn at the last walk
 
                 // Stimuli at the segment's midpoint tangent: turn the start-frame components by x = θ/2 in the bending
                 // plane, g += adj·κ with adj·|κ| = (cos x − 1)(g·κ̂) − sin x (g·t̂), without dividing by |κ|. The
                 // arc functions of the drawn κ were kept from the last walk.
-                double sinOverKm = hsArray[s] * halfDs; // sin(x)/|κ|
-                double cosMinusOneOverKm2 = -omcArray[s] * halfDs2; // (cos x − 1)/|κ|²
+                double sinOverKm = Unsafe.Add(ref g, Hs) * halfDs; // sin(x)/|κ|
+                double cosMinusOneOverKm2 = -Unsafe.Add(ref g, Omc) * halfDs2; // (cos x − 1)/|κ|²
                 double gu = uz, gv = vz, lu = 0, lv = 0;
                 double adj = (cosMinusOneOverKm2 * ((gu * sku) + (gv * skv))) - (sinOverKm * tz);
                 gu += adj * sku;
@@ -488,22 +510,24 @@ public sealed class Stem
 
                 if (read0 >= 0)
                 {
+                    // Slots and segments are in range by construction (HistoryCapacity × n pairs).
                     if (pushSlot >= 0)
                     {
-                        int w = ((pushSlot * n) + s) * 2;
-                        history[w] = gu;
-                        history[w + 1] = gv;
+                        ref double w = ref Unsafe.Add(ref history0, ((pushSlot * n) + s) * 2);
+                        w = gu;
+                        Unsafe.Add(ref w, 1) = gv;
                     }
 
-                    int r0 = ((read0 * n) + s) * 2, r1 = ((read1 * n) + s) * 2;
-                    gu = history[r0] + (readWeight * (history[r1] - history[r0]));
-                    gv = history[r0 + 1] + (readWeight * (history[r1 + 1] - history[r0 + 1]));
+                    ref double h0 = ref Unsafe.Add(ref history0, ((read0 * n) + s) * 2);
+                    ref double h1 = ref Unsafe.Add(ref history0, ((read1 * n) + s) * 2);
+                    gu = h0 + (readWeight * (h1 - h0));
+                    gv = Unsafe.Add(ref h0, 1) + (readWeight * (Unsafe.Add(ref h1, 1) - Unsafe.Add(ref h0, 1)));
                 }
 
                 ku = (ku * decay) + (((cGravity * gu) + (cLight * lu)) * gain);
                 kv = (kv * decay) + (((cGravity * gv) + (cLight * lv)) * gain);
-                kuArray[s] = ku;
-                kvArray[s] = kv;
+                Unsafe.Add(ref g, Ku) = ku;
+                Unsafe.Add(ref g, Kv) = kv;
                 if (!basal)
                 {
                     gku = ku;
@@ -517,8 +541,9 @@ public sealed class Stem
                     _basalSumU += ku * grownM;
                     _basalSumV += kv * grownM;
                     _basalWeight += grownM;
-                    gku = _basalSumU / _basalWeight;
-                    gkv = _basalSumV / _basalWeight;
+                    double inverseWeight = 1 / _basalWeight;
+                    gku = _basalSumU * inverseWeight;
+                    gkv = _basalSumV * inverseWeight;
                 }
                 else if (_basalWeight == 0)
                 {
@@ -529,16 +554,16 @@ public sealed class Stem
 
             // The arc functions of the new drawn curvature, for the transport below and the next step's sensing.
             double dku = gku + (nutWeight * nutNewU), dkv = gkv + (nutWeight * nutNewV);
-            drawnU[s] = dku;
-            drawnV[s] = dkv;
-            ArcFunctions(((dku * dku) + (dkv * dkv)) * quarterDs2, out chArray[s], out hsArray[s], out omcArray[s]);
+            Unsafe.Add(ref g, DrawnU) = dku;
+            Unsafe.Add(ref g, DrawnV) = dkv;
+            ArcFunctions(((dku * dku) + (dkv * dkv)) * quarterDs2, out Unsafe.Add(ref g, Ch), out Unsafe.Add(ref g, Hs), out Unsafe.Add(ref g, Omc));
         }
 
         double cx = _tb.X, cy = _tb.Y, cz = _tb.Z, ax = _ub.X, ay = _ub.Y, az = _ub.Z, bx = _vb.X, by = _vb.Y, bz = _vb.Z;
         double px = _base.X, py = _base.Y, pz = _base.Z;
         double halfDsSq2 = 0.5 * ds * ds;
-        Vector3[] nodes = _nodes;
-        nodes[0] = _base;
+        ref Vector3 node0 = ref MemoryMarshal.GetArrayDataReference(_nodes); // n + 1 nodes
+        node0 = _base;
         for (int i = 0; i < n; i++)
         {
             int s = head + i;
@@ -547,22 +572,22 @@ public sealed class Stem
                 s -= n;
             }
 
-            int f = s * 9;
-            frames[f] = cx;
-            frames[f + 1] = cy;
-            frames[f + 2] = cz;
-            frames[f + 3] = ax;
-            frames[f + 4] = ay;
-            frames[f + 5] = az;
-            frames[f + 6] = bx;
-            frames[f + 7] = by;
-            frames[f + 8] = bz;
+            ref double g = ref Unsafe.Add(ref seg0, s * SegmentStride);
+            g = cx;
+            Unsafe.Add(ref g, 1) = cy;
+            Unsafe.Add(ref g, 2) = cz;
+            Unsafe.Add(ref g, 3) = ax;
+            Unsafe.Add(ref g, 4) = ay;
+            Unsafe.Add(ref g, 5) = az;
+            Unsafe.Add(ref g, 6) = bx;
+            Unsafe.Add(ref g, 7) = by;
+            Unsafe.Add(ref g, 8) = bz;
 
             // Carry the frame through the arc: rotation by θ = |κ|ds about t̂ × κ̂, division-free (κ may be zero).
             // With x = θ/2: sin θ/|κ| = ds·sinc(x)·cos x, (1 − cos θ)/|κ|² = ds²·sinc²(x)/2.
-            double ku = drawnU[s], kv = drawnV[s], hs = hsArray[s];
+            double ku = Unsafe.Add(ref g, DrawnU), kv = Unsafe.Add(ref g, DrawnV), hs = Unsafe.Add(ref g, Hs);
             double km2 = (ku * ku) + (kv * kv);
-            double sinOverKmFull = ds * hs * chArray[s];
+            double sinOverKmFull = ds * hs * Unsafe.Add(ref g, Ch);
             double omc2 = halfDsSq2 * hs * hs;
             double kx = (ku * ax) + (kv * bx), ky = (ku * ay) + (kv * by), kz = (ku * az) + (kv * bz);
             px += (cx * sinOverKmFull) + (kx * omc2);
@@ -579,7 +604,7 @@ public sealed class Stem
             cx = (cx * ct) + (kx * sinOverKmFull);
             cy = (cy * ct) + (ky * sinOverKmFull);
             cz = (cz * ct) + (kz * sinOverKmFull);
-            nodes[i + 1] = new Vector3(px, py, pz);
+            Unsafe.Add(ref node0, i + 1) = new Vector3(px, py, pz);
         }
 
         _apexTangent = new Vector3(cx, cy, cz);
@@ -610,16 +635,20 @@ public sealed class Stem
         t = tNew;
     }
 
-    /// <summary>cos x, sin(x)/x and (1 − cos x)/x²; Taylor series for |x| &lt; 0.6 (error below 1e-12), the library otherwise.</summary>
-    /// <summary>cos x, sin(x)/x and (1 − cos x)/x² from x²: Taylor series below x = 0.6 (no square root), the library above.</summary>
-    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    /// <summary>cos x, sin(x)/x and (1 − cos x)/x² from x²: Taylor series below x = 0.6 (no square root; error below 1e-12), the library above.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void ArcFunctions(double x2, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x2 < 0.36)
         {
-            oneMinusCosOverX2 = 0.5 * (1 - (x2 * (1.0 / 12) * (1 - (x2 * (1.0 / 30) * (1 - (x2 * (1.0 / 56) * (1 - (x2 * (1.0 / 90)))))))));
+            // The same Taylor terms as HalfAngle, summed in pairs (Estrin's scheme): a shorter dependent chain than
+            // nested multiplication, and this chain lies on every segment's path from sensing to transport.
+            double x4 = x2 * x2;
+            oneMinusCosOverX2 = (0.5 - (x2 * (1.0 / 24)))
+                + (x4 * (((1.0 / 720) - (x2 * (1.0 / 40320))) + (x4 * (1.0 / 3628800))));
             cos = 1 - (x2 * oneMinusCosOverX2);
-            sinc = 1 - (x2 * (1.0 / 6) * (1 - (x2 * (1.0 / 20) * (1 - (x2 * (1.0 / 42) * (1 - (x2 * (1.0 / 72) * (1 - (x2 * (1.0 / 110))))))))));
+            sinc = (1 - (x2 * (1.0 / 6)))
+                + (x4 * (((1.0 / 120) - (x2 * (1.0 / 5040))) + (x4 * ((1.0 / 362880) - (x2 * (1.0 / 39916800))))));
             return;
         }
 
@@ -729,8 +758,9 @@ public sealed class Stem
     {
         int s = _head;
         Vector3 t = _tb, u = _ub, v = _vb, p = _base;
-        double ku = _basalWeight > 0 ? _basalSumU / _basalWeight : _ku[s];
-        double kv = _basalWeight > 0 ? _basalSumV / _basalWeight : _kv[s];
+        int g = s * SegmentStride;
+        double ku = _basalWeight > 0 ? _basalSumU / _basalWeight : _seg[g + Ku];
+        double kv = _basalWeight > 0 ? _basalSumV / _basalWeight : _seg[g + Kv];
         _basalSumU = _basalSumV = _basalWeight = 0;
         Transport(ref t, ref u, ref v, ref p, ku, kv, _ds);
         _tb = t;
@@ -741,10 +771,10 @@ public sealed class Stem
         AppendPolyline(p);
 
         _head = s + 1 == _n ? 0 : s + 1;
-        _ku[s] = 0;
-        _kv[s] = 0;
-        _hs[s] = 1;
-        _omc[s] = 0.5;
+        _seg[g + Ku] = 0;
+        _seg[g + Kv] = 0;
+        _seg[g + Hs] = 1;
+        _seg[g + Omc] = 0.5;
         if (_n > 1)
         {
             // The new apical segment (storage s) inherits the sensing history of the segment below it.
