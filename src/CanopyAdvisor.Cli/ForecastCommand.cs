@@ -8,7 +8,6 @@ using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Validation;
 using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Temperature;
-using CanopyAdvisor.Files.Weather;
 using CanopyAdvisor.Reports;
 using NodaTime;
 using NodaTime.Text;
@@ -65,9 +64,7 @@ internal static class ForecastCommand
             }
 
             string? weatherPath = parse.GetValue(weather);
-            IOutsideLightSource outside = weatherPath is null
-                ? new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather)
-                : new MeasuredOutsideLight(WeatherLogReader.ReadFile(weatherPath), model.Location);
+            IOutsideLightSource outside = DaylightSource.Create(model, weatherPath);
             string? temperaturePath = parse.GetValue(temperatures);
             ITemperatureSource temperature;
             if (temperaturePath is null)
@@ -100,14 +97,7 @@ internal static class ForecastCommand
                 error.WriteLine($"map written to {mapPath}");
             }
 
-            if (parse.GetValue(json))
-            {
-                JsonOutput.Write(output, report);
-            }
-            else
-            {
-                WriteText(output, report);
-            }
+            JsonOutput.WriteReport(output, report, parse.GetValue(json), WriteText);
 
             return 0;
         });
@@ -149,7 +139,7 @@ internal static class ForecastCommand
             Format(forecast.Now),
             Format(forecast.HorizonEnd),
             forecast.Step.TotalMinutes,
-            site.Structure is IndoorRoom ? "none (indoor room)" : weatherPath is null ? "clear sky × daily clearness" : $"measured log {Path.GetFileName(weatherPath)}",
+            DaylightSource.Describe(site, weatherPath),
             temperaturePath is null
                 ? string.Create(CultureInfo.InvariantCulture, $"setpoints {site.Temperatures.DayC}/{site.Temperatures.NightC} °C day/night, pre-dawn drop {site.Temperatures.PreDawnDropC} °C for {site.Temperatures.PreDawnDropHours} h")
                 : $"measured log {Path.GetFileName(temperaturePath)}",

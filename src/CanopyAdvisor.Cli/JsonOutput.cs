@@ -17,4 +17,17 @@ internal static class JsonOutput
     };
 
     public static void Write<T>(TextWriter output, T value) => output.WriteLine(JsonSerializer.Serialize(value, Options));
+
+    /// <summary>Writes a report as JSON when asked, else as the command's own text.</summary>
+    public static void WriteReport<T>(TextWriter output, T report, bool json, Action<TextWriter, T> writeText)
+    {
+        if (json)
+        {
+            Write(output, report);
+        }
+        else
+        {
+            writeText(output, report);
+        }
+    }
 }

@@ -6,7 +6,6 @@ using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Structures;
 using CanopyAdvisor.Core.Validation;
-using CanopyAdvisor.Files.Weather;
 using CanopyAdvisor.Reports;
 using NodaTime;
 using NodaTime.Text;
@@ -44,9 +43,7 @@ internal static class LightCommand
             // Read and check every input before any computing starts: nothing is computed from half-read data.
             Site model = SiteSource.Load(parse.GetValue(site)!);
             LocalDate first = firstGiven ?? clock.GetCurrentInstant().InZone(model.Zone).Date;
-            IOutsideLightSource outside = weatherPath is null
-                ? new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather)
-                : new MeasuredOutsideLight(WeatherLogReader.ReadFile(weatherPath), model.Location);
+            IOutsideLightSource outside = DaylightSource.Create(model, weatherPath);
 
             var progress = new ProgressReporter(error, "computing light", interactive);
             IEnclosure enclosure = EnclosureBuilder.Build(model);
@@ -62,14 +59,7 @@ internal static class LightCommand
                 error.WriteLine($"map written to {mapPath}");
             }
 
-            if (parse.GetValue(json))
-            {
-                JsonOutput.Write(output, report);
-            }
-            else
-            {
-                WriteText(output, report);
-            }
+            JsonOutput.WriteReport(output, report, parse.GetValue(json), WriteText);
 
             return 0;
         });

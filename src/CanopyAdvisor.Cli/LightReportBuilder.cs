@@ -34,7 +34,7 @@ internal static class LightReportBuilder
             LocalDatePattern.Iso.Format(summary.FirstDay),
             dayCount,
             summary.Step.TotalMinutes,
-            site.Structure is IndoorRoom ? "none (indoor room)" : weatherPath is null ? $"clear sky (Ineichen–Perez, Linke turbidity {site.Weather.LinkeTurbidity}) × daily clearness {site.Weather.DailyClearness}" : $"measured log {Path.GetFileName(weatherPath)}",
+            DaylightSource.Describe(site, weatherPath),
             summary.MissingSteps,
             benches);
     }

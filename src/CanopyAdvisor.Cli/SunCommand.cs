@@ -32,14 +32,7 @@ internal static class SunCommand
             DateTimeZone dayZone = parse.GetValue(zone) is string id ? TimeArguments.ParseZone(id, "--time-zone") : DateTimeZone.ForOffset(at.Offset);
             GeoLocation location = Location(parse.GetValue(lat), parse.GetValue(lon), parse.GetValue(elevation));
             SunReport report = Compute(location, at.ToInstant(), dayZone);
-            if (parse.GetValue(json))
-            {
-                JsonOutput.Write(output, report);
-            }
-            else
-            {
-                WriteText(output, report);
-            }
+            JsonOutput.WriteReport(output, report, parse.GetValue(json), WriteText);
 
             return 0;
         });
