@@ -296,23 +296,27 @@ public sealed class SiteFileReader
             return new Footprint(Num(x), Num(y), Angle.FromDegrees(Num(azimuth)), Num(length), Num(width));
         }
 
-        private void ReadCoverTypes(JsonObjectReader root)
+        /// <summary>Reads a map of named definitions (cover or lamp types): records every name, reads each that is an object.</summary>
+        private void ReadDefinitions(JsonObjectReader root, string section, HashSet<string> defined, Action<string, JsonElement, JsonObjectReader> read)
         {
-            JsonObjectReader? map = root.Object("coverTypes", required: false);
+            JsonObjectReader? map = root.Object(section, required: false);
             if (map is null)
             {
                 return;
             }
 
-            foreach ((string typeName, JsonElement value, string path) in map.Entries())
+            foreach ((string name, JsonElement value, string path) in map.Entries())
             {
-                definedCoverTypes.Add(typeName);
-                JsonObjectReader? o = JsonObjectReader.Open(value, path, errors);
-                if (o is null)
+                defined.Add(name);
+                if (JsonObjectReader.Open(value, path, errors) is JsonObjectReader o)
                 {
-                    continue;
+                    read(name, value, o);
                 }
+            }
+        }
 
+        private void ReadCoverTypes(JsonObjectReader root) => ReadDefinitions(root, "coverTypes", definedCoverTypes, (typeName, _, o) =>
+            {
                 bool opaque = o.Boolean("opaque", required: false) ?? false;
                 double? n = o.Number("refractiveIndex", required: !opaque);
                 double? k = o.Number("extinctionPerM", required: !opaque);
@@ -322,8 +326,7 @@ public sealed class SiteFileReader
                 coverTypes[typeName] = opaque
                     ? Cover.OpaqueSurface(typeName)
                     : new Cover(typeName, false, Num(n), Num(k), Num(thickness), layers ?? 0);
-            }
-        }
+            });
 
         private (Structure? Structure, bool Complete, string? Kind) ReadStructure(JsonObjectReader root)
         {
@@ -398,23 +401,8 @@ public sealed class SiteFileReader
             return Cover.OpaqueSurface(typeName ?? surface);
         }
 
-        private void ReadLampTypes(JsonObjectReader root)
-        {
-            JsonObjectReader? map = root.Object("lampTypes", required: false);
-            if (map is null)
+        private void ReadLampTypes(JsonObjectReader root) => ReadDefinitions(root, "lampTypes", definedLampTypes, (typeName, value, o) =>
             {
-                return;
-            }
-
-            foreach ((string typeName, JsonElement value, string path) in map.Entries())
-            {
-                definedLampTypes.Add(typeName);
-                JsonObjectReader? o = JsonObjectReader.Open(value, path, errors);
-                if (o is null)
-                {
-                    continue;
-                }
-
                 (BeamDistribution beam, double? filePpf) = ReadBeam(o);
 
                 // An IES beam brings its own flux (if its file fails, that is reported there, not as a missing PPF).
@@ -437,8 +425,7 @@ public sealed class SiteFileReader
                 o.Finish();
                 lampTypes[typeName] = new LampType(
                     beam, ppf ?? filePpf ?? double.NaN, Num(watts), new BandFractions(Num(blue), Num(green), Num(red), Num(farRed)));
-            }
-        }
+            });
 
         private (BeamDistribution Beam, double? FilePpf) ReadBeam(JsonObjectReader type)
         {
