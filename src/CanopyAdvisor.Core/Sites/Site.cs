@@ -33,4 +33,7 @@ public sealed record Site(
 
     /// <summary>The air temperature setpoints used when no measured temperature log is given.</summary>
     public TemperatureSetpoints Temperatures { get; init; } = TemperatureSetpoints.Default;
+
+    /// <summary>The electricity price, for the cost of added lamp energy; <see cref="EnergyTariff.Unknown"/> when not given.</summary>
+    public EnergyTariff Tariff { get; init; } = EnergyTariff.Unknown;
 }

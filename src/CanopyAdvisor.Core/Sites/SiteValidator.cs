@@ -58,6 +58,9 @@ public static class SiteValidator
     /// <summary>Lowest temperature setpoint accepted, −10 °C.</summary>
     public const double MinSetpointC = -10;
 
+    /// <summary>The highest electricity price accepted, per kWh in the tariff's currency (a guard against unit slips).</summary>
+    public const double MaxPricePerKWh = 100;
+
     /// <summary>Highest temperature setpoint accepted, 45 °C.</summary>
     public const double MaxSetpointC = 45;
 
@@ -137,6 +140,7 @@ public static class SiteValidator
         errors.AddRange(CheckUniqueIds(site.Obstructions.Select(o => o.Id), paths.Obstruction, "obstruction"));
 
         errors.AddRange(CheckTemperatures(site.Temperatures, "temperatures"));
+        errors.AddRange(CheckTariff(site.Tariff, "tariff"));
         for (int i = 0; i < site.Lots.Length; i++)
         {
             errors.AddRange(CheckLot(site.Lots[i], LotPath(i), site.Benches, site.Zone));
@@ -458,6 +462,19 @@ public static class SiteValidator
             errors.Add(new(
                 $"{path}.nightC",
                 $"must be at most {Format(MaxNightAboveDayC)} °C above dayC = {Format(temperatures.DayC)} °C, got {Format(temperatures.NightC)} °C"));
+        }
+
+        return errors;
+    }
+
+    /// <summary>A tariff: a finite price per kWh within [0, 100] and a currency of three capital letters (ISO 4217 form).</summary>
+    public static IEnumerable<ValidationError> CheckTariff(EnergyTariff tariff, string path)
+    {
+        ArgumentNullException.ThrowIfNull(tariff);
+        var errors = Collect(Within(tariff.PricePerKWh, 0, MaxPricePerKWh, $"{path}.pricePerKWh"));
+        if (tariff.Currency is null || tariff.Currency.Length != 3 || !tariff.Currency.All(char.IsAsciiLetterUpper))
+        {
+            errors.Add(new($"{path}.currency", $"must be an ISO 4217 code of three capital letters (e.g. EUR), got '{tariff.Currency}'"));
         }
 
         return errors;

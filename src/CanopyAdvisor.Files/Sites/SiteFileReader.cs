@@ -159,6 +159,7 @@ public sealed class SiteFileReader
             ReadLampRows(root);
             ReadObstructions(root);
             TemperatureSetpoints temperatures = ReadTemperatures(root);
+            EnergyTariff tariff = ReadTariff(root);
             ReadLots(root, zone);
             root.Finish();
 
@@ -176,6 +177,7 @@ public sealed class SiteFileReader
             {
                 Lots = [.. lots],
                 Temperatures = temperatures,
+                Tariff = tariff,
             };
             var paths = new SitePaths(
                 i => benchPaths[i],
@@ -752,6 +754,20 @@ public sealed class SiteFileReader
             double dropHours = o.Number("preDawnDropHours", required: false) ?? (o.Has("preDawnDropHours") ? double.NaN : 0);
             o.Finish();
             return new TemperatureSetpoints(Num(day), Num(night), dropC, dropHours);
+        }
+
+        private static EnergyTariff ReadTariff(JsonObjectReader root)
+        {
+            JsonObjectReader? o = root.Object("tariff", required: false);
+            if (o is null)
+            {
+                return EnergyTariff.Unknown;
+            }
+
+            double? price = o.Number("pricePerKWh");
+            string? currency = o.Text("currency");
+            o.Finish();
+            return new EnergyTariff(Num(price), currency ?? string.Empty);
         }
 
         private void ReadLots(JsonObjectReader root, DateTimeZone? zone)

@@ -147,6 +147,7 @@ public class DemoSitesTests
         Assert.All(site.Lots, l => Assert.InRange(l.PlantedOn, new LocalDate(2026, 10, 1), new LocalDate(2026, 11, 30)));
         Assert.All(site.Lots, l => Assert.InRange(l.SaleOn, new LocalDate(2026, 12, 1), new LocalDate(2027, 2, 28)));
         Assert.Equal(new TemperatureSetpoints(19, 18, 3, 2), site.Temperatures);
+        Assert.Equal(new EnergyTariff(0.21, "EUR"), site.Tariff); // invented demo price
 
         // A lot's plants are shorter than its bench's canopy is tall (the canopy is the light model's crop layer).
         Assert.All(site.Lots, l => Assert.True(l.HeightMm / 1000 <= site.Benches.Single(b => b.Id == l.BenchId).Canopy.HeightM, l.Id));

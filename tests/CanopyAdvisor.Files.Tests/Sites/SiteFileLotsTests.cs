@@ -19,6 +19,7 @@ public class SiteFileLotsTests
         Site site = Read(SiteJson.Glasshouse);
 
         Assert.Equal(new TemperatureSetpoints(20, 17, 3, 2), site.Temperatures);
+        Assert.Equal(new EnergyTariff(0.2, "EUR"), site.Tariff);
         Lot lot = Assert.Single(site.Lots);
         Assert.Equal("lot-1", lot.Id);
         Assert.Equal("b1", lot.BenchId);
@@ -54,6 +55,7 @@ public class SiteFileLotsTests
         // README: without temperatures, 20 °C day, 18 °C night, no drop; without lots, none; drop fields default to 0.
         Site bare = Read(SiteJson.With(SiteJson.Glasshouse, ("temperatures", SiteJson.Remove), ("lots", SiteJson.Remove)));
         Assert.Equal(TemperatureSetpoints.Default, bare.Temperatures);
+        Assert.False(bare.Tariff.IsKnown); // no tariff given: cost unknown, not guessed
         Assert.Equal(new TemperatureSetpoints(20, 18, 0, 0), bare.Temperatures);
         Assert.Empty(bare.Lots);
 

@@ -144,6 +144,12 @@ public class SiteFileReaderBadFileTests
         { "pre-dawn drop 13 h (README: [0, 12])", G, "temperatures.preDawnDropHours", "13", "temperatures.preDawnDropHours", "must be within [0, 12], got 13" },
         { "setpoints without a day value (README: dayC required)", G, "temperatures.dayC", SiteJson.Remove, "temperatures.dayC", "is required" },
 
+        // Electricity tariff (README "tariff"; currency codes are ISO 4217's three capital letters).
+        { "negative price (README: [0, 100])", G, "tariff.pricePerKWh", "-0.1", "tariff.pricePerKWh", "must be within [0, 100], got -0.1" },
+        { "price in cents by mistake (README: [0, 100])", G, "tariff.pricePerKWh", "210", "tariff.pricePerKWh", "must be within [0, 100], got 210" },
+        { "currency in lower case (ISO 4217)", G, "tariff.currency", "\"eur\"", "tariff.currency", "must be an ISO 4217 code of three capital letters" },
+        { "currency symbol (ISO 4217)", G, "tariff.currency", "\"€\"", "tariff.currency", "must be an ISO 4217 code of three capital letters" },
+
         // The shape of the file (README: format).
         { "unknown property (README: no unknown names)", G, "benches[0].colour", "2", "benches[0].colour", "unknown property (expected one of: canopy, footprint, id," },
         { "misspelt property gets a hint (README: no unknown names)", G, "benches[0].footprint.widhtM", "2", "benches[0].footprint.widhtM", "unknown property; did you mean 'widthM'?" },

@@ -53,6 +53,7 @@ internal static partial class SiteJson
               "baseHeightM": 0, "topHeightM": 6 }
           ],
           "temperatures": { "dayC": 20, "nightC": 17, "preDawnDropC": 3, "preDawnDropHours": 2 },
+          "tariff": { "pricePerKWh": 0.2, "currency": "EUR" },
           "lots": [
             { "id": "lot-1", "benchId": "b1", "crop": "petunia-compact", "plantedOn": "2026-11-20", "saleOn": "2027-01-15",
               "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 800,
