@@ -53,7 +53,7 @@ public class SiteFileLotsTests
     public void Sections_are_optional_with_documented_defaults()
     {
         // README: without temperatures, 20 °C day, 18 °C night, no drop; without lots, none; drop fields default to 0.
-        Site bare = Read(SiteJson.With(SiteJson.Glasshouse, ("temperatures", SiteJson.Remove), ("lots", SiteJson.Remove)));
+        Site bare = Read(SiteJson.With(SiteJson.Glasshouse, ("temperatures", SiteJson.Remove), ("tariff", SiteJson.Remove), ("lots", SiteJson.Remove)));
         Assert.Equal(TemperatureSetpoints.Default, bare.Temperatures);
         Assert.False(bare.Tariff.IsKnown); // no tariff given: cost unknown, not guessed
         Assert.Equal(new TemperatureSetpoints(20, 18, 0, 0), bare.Temperatures);
