@@ -122,71 +122,19 @@ public static class BenchForecaster
         return step * multiple;
     }
 
-    /// <summary>Forecasts every bench that carries a lot.</summary>
+    /// <summary>Forecasts every bench that carries a lot (<see cref="ForecastSession.Prepare"/> then
+    /// <see cref="ForecastSession.Run"/>).</summary>
     /// <param name="request">The site, crops, sources and settings.</param>
     /// <param name="progress">Receives the fraction done, in (0, 1], as benches finish (from worker threads).</param>
     /// <param name="cancellationToken">Stops the run between benches.</param>
     /// <returns>One forecast per bench with a lot, in site bench order.</returns>
     /// <exception cref="InvalidInputException">The request, site, lots or crops are not usable; every problem is listed.</exception>
-    public static SiteForecast Run(ForecastRequest request, IProgress<double>? progress = null, CancellationToken cancellationToken = default)
-    {
-        ArgumentNullException.ThrowIfNull(request);
-        Plan plan = Validate(request);
-        Site site = request.Site;
-        DateTimeZone zone = site.Zone;
-        Instant now = request.Now;
-        Instant end = now + request.Horizon;
-        Duration dt = request.Step ?? DefaultStep(plan.Lots.Select(l => l.Crop));
-        if (plan.Lots.Count == 0)
-        {
-            progress?.Report(1);
-            return new SiteForecast(now, end, dt, [], 0, 0);
-        }
+    public static SiteForecast Run(ForecastRequest request, IProgress<double>? progress = null, CancellationToken cancellationToken = default) =>
+        ForecastSession.Prepare(request).Run(progress, cancellationToken);
 
-        // Canopies from the lots, then one compile for the whole run.
-        ImmutableArray<Bench> benches = site.Benches;
-        var benchesWithCanopy = benches.ToBuilder();
-        foreach (LotPlan lot in plan.Lots)
-        {
-            Bench bench = benches[lot.BenchIndex];
-            double heightM = lot.Lot.HeightMm / ModelConstants.MillimetresPerMetre;
-            double depthM = Math.Min(heightM, lot.Crop.GrowthZoneLengthMm.Value / ModelConstants.MillimetresPerMetre / 2);
-            double spacingRatio = request.ReferenceSpacingM / lot.Lot.SpacingM;
-            double lad = lot.Crop.LeafAreaDensityM2PerM3.Value * spacingRatio * spacingRatio;
-            benchesWithCanopy[lot.BenchIndex] = bench with { Canopy = new Canopy(heightM, depthM, lad) };
-        }
-
-        Site compiledSite = site with { Benches = benchesWithCanopy.MoveToImmutable() };
-        IEnclosure enclosure = EnclosureBuilder.Build(compiledSite);
-        CompiledLightField field = LightFieldCompiler.Compile(compiledSite, enclosure, request.LightOptions);
-
-        Instant earliest = plan.Lots.Min(l => l.Start);
-        Duration spinUpStep = SpinUpStep(dt);
-        var timeline = new ForecastTimeline(earliest, now, end, spinUpStep, dt, request.OutsideLight, request.Temperature, zone);
-        Instant hourFrom = plan.Lots.Min(l => Min(l.Start, l.MeasuredAt));
-        Instant hourTo = Max(end, plan.Lots.Max(l => Max(l.SaleAt, l.MeasuredAt)));
-        var hourly = new ForecastTimeline(hourFrom, now, hourTo, Duration.FromHours(1), Duration.FromHours(1), request.OutsideLight, request.Temperature, zone);
-        bool withBand = request.IncludeUncertainty && !request.UncertaintyKeys.IsDefaultOrEmpty;
-        ForecastTimeline bandTimeline = withBand && spinUpStep != dt
-            ? new ForecastTimeline(earliest, now, end, spinUpStep, spinUpStep, request.OutsideLight, request.Temperature, zone)
-            : timeline;
-
-        var results = new BenchForecast[plan.Lots.Count];
-        int done = 0;
-        var options = new ParallelOptions { CancellationToken = cancellationToken };
-        Parallel.For(0, plan.Lots.Count, options, i =>
-        {
-            results[i] = ForecastBench(request, plan.Lots[i], field, timeline, bandTimeline, hourly);
-            int finished = Interlocked.Increment(ref done);
-            progress?.Report(finished / (double)plan.Lots.Count);
-        });
-
-        return new SiteForecast(now, end, dt, [.. results], timeline.MissingLight, timeline.MissingTemperature);
-    }
-
-    private static BenchForecast ForecastBench(
+    internal static BenchForecast ForecastBench(
         ForecastRequest request, LotPlan lot, CompiledLightField field, ForecastTimeline timeline, ForecastTimeline bandTimeline,
-        ForecastTimeline hourly)
+        ForecastTimeline hourly, ImmutableArray<RotationRecord> planned, bool includeUncertainty)
     {
         Crop crop = lot.Crop;
         StemParameters parameters = crop.ToStemParameters();
@@ -205,9 +153,9 @@ public static class BenchForecaster
             Math.Max(MinimumStartHeightM, parameters.GrowthZoneLengthM),
             HeightAt(timeline.Edges[firstEdge]));
 
-        ImmutableArray<RotationRecord> rotations = lot.Lot.Rotations.IsDefault
-            ? []
-            : [.. lot.Lot.Rotations.Where(r => r.At < now).OrderBy(r => r.At)];
+        ImmutableArray<RotationRecord> done = lot.Lot.Rotations.IsDefault ? [] : lot.Lot.Rotations;
+        ImmutableArray<RotationRecord> rotations =
+            [.. done.Where(r => r.At < now).Concat(planned.IsDefault ? [] : planned.Where(r => r.At >= now)).OrderBy(r => r.At)];
         var run = new BenchRun(field, timeline, firstEdge, rotations, parameters.NutationPeriod);
         Angle gradeLimit = Angle.FromDegrees(crop.LeanGradeLimitDeg.Value);
         Instant gradeEnd = Min(end, lot.SaleAt);
@@ -240,7 +188,7 @@ public static class BenchForecaster
         }
 
         LeanUncertainty? band = null;
-        if (request.IncludeUncertainty && !request.UncertaintyKeys.IsDefaultOrEmpty)
+        if (includeUncertainty && !request.UncertaintyKeys.IsDefaultOrEmpty)
         {
             int worstPoint = first + worstIndex;
             int[] points = worstPoint == centre ? [centre] : [centre, worstPoint];
@@ -269,7 +217,10 @@ public static class BenchForecaster
             meanDif,
             band,
             flags.ToImmutable(),
-            [.. run.EndEast.Select((e, i) => LeanReading.FromLeanVector(e, run.EndNorth[i]))]);
+            [.. run.EndEast.Select((e, i) => LeanReading.FromLeanVector(e, run.EndNorth[i]))])
+        {
+            LeanTrack = [.. run.Track],
+        };
     }
 
     private static LeanUncertainty Band(
@@ -434,7 +385,7 @@ public static class BenchForecaster
 
     private static Instant Max(Instant a, Instant b) => a > b ? a : b;
 
-    private static Plan Validate(ForecastRequest request)
+    internal static Plan Validate(ForecastRequest request)
     {
         var errors = new List<ValidationError>();
         Site site = request.Site;
@@ -551,6 +502,19 @@ public static class BenchForecaster
             lots.Add(new LotPlan(lot, crop, benchIndex, Min(start, request.Now), measured, sale));
         }
 
+        ImmutableDictionary<string, ImmutableArray<RotationRecord>> planned = request.PlannedRotations ?? ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;
+        foreach ((string lotId, ImmutableArray<RotationRecord> rotations) in planned.OrderBy(p => p.Key, StringComparer.Ordinal))
+        {
+            string path = $"plannedRotations.{lotId}";
+            if (!siteLots.Any(l => l is not null && l.Id == lotId))
+            {
+                errors.Add(new ValidationError(path, $"no lot '{lotId}' on the site"));
+                continue;
+            }
+
+            errors.AddRange(ForecastSession.CheckPlanned(rotations, request.Now, request.Now + request.Horizon, path));
+        }
+
         if (errors.Count > 0)
         {
             throw new InvalidInputException(errors);
@@ -565,7 +529,9 @@ public static class BenchForecaster
 
     private static string Iso(LocalDate date) => date.ToString("uuuu-MM-dd", CultureInfo.InvariantCulture);
 
-    private sealed record Plan(List<LotPlan> Lots);
+    /// <summary>The validated lots of a request, in bench order.</summary>
+    internal sealed record Plan(List<LotPlan> Lots);
 
-    private sealed record LotPlan(Lot Lot, Crop Crop, int BenchIndex, Instant Start, Instant MeasuredAt, Instant SaleAt);
+    /// <summary>One validated lot: its crop, bench index, simulation start, measurement time and sale time.</summary>
+    internal sealed record LotPlan(Lot Lot, Crop Crop, int BenchIndex, Instant Start, Instant MeasuredAt, Instant SaleAt);
 }

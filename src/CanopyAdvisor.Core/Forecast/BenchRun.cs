@@ -39,6 +39,7 @@ internal sealed class BenchRun
     public double LeanAtLeaveDeg;
     public List<Instant> RateTimes = [];
     public List<Vector3> RateVectors = [];
+    public List<LeanSample> Track = [];
     public double HorizonPpfdSeconds, HorizonPssHours, HorizonLitHours, HorizonDifHours, HorizonHours;
 
     /// <summary>The main run over all points of a bench.</summary>
@@ -69,6 +70,8 @@ internal sealed class BenchRun
         int rotation = SkipRotationsBefore(tl.Edges[_firstEdge]);
         var east = new double[count];
         var north = new double[count];
+        // Track samples on the hours of now (now − whole hours), from the first edge on.
+        Instant trackNext = tl.Edges[tl.AnchorEdge] - Duration.FromHours(Math.Floor((tl.Edges[tl.AnchorEdge] - tl.Edges[_firstEdge]).TotalHours));
 
         Measure(stems, east, north, out double meanE, out double meanN);
         Record(_firstEdge, east, north, meanE, meanN);
@@ -131,12 +134,9 @@ internal sealed class BenchRun
             ringNext = (ringNext + 1) % ringSize;
             ringCount = Math.Min(ringCount + 1, ringSize);
             Instant t = tl.Edges[edge];
-            if (edge < tl.AnchorEdge)
-            {
-                return;
-            }
-
-            if (LeavesGradeAt is null && t <= gradeEnd)
+            bool tracked = t >= trackNext || edge == tl.Count;
+            bool graded = edge >= tl.AnchorEdge && LeavesGradeAt is null && t <= gradeEnd;
+            if (tracked || graded)
             {
                 double ae = 0, an = 0;
                 for (int k = 0; k < ringCount; k++)
@@ -145,12 +145,28 @@ internal sealed class BenchRun
                     an += ringN[k];
                 }
 
-                double tilt = Math.Asin(Math.Min(1, Math.Sqrt((ae * ae) + (an * an)) / ringCount));
-                if (tilt > gradeLimitRadians)
+                ae /= ringCount;
+                an /= ringCount;
+                if (tracked)
+                {
+                    Track.Add(new LeanSample(t, LeanReading.FromLeanVector(ae, an)));
+                    while (trackNext <= t)
+                    {
+                        trackNext += Duration.FromHours(1);
+                    }
+                }
+
+                double tilt = Math.Asin(Math.Min(1, Math.Sqrt((ae * ae) + (an * an))));
+                if (graded && tilt > gradeLimitRadians)
                 {
                     LeavesGradeAt = t;
                     LeanAtLeaveDeg = tilt * Angle.DegreesPerRadian;
                 }
+            }
+
+            if (edge < tl.AnchorEdge)
+            {
+                return;
             }
 
             double ticks = t.ToUnixTimeTicks();

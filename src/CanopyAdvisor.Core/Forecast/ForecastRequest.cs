@@ -64,6 +64,12 @@ public sealed record ForecastRequest(
     /// <summary>Light-field compile settings; <see cref="LightFieldOptions.Default"/> when null.</summary>
     public LightFieldOptions? LightOptions { get; init; }
 
+    /// <summary>Pot rotations assumed from now on, by lot id, each list in time order within now … now + horizon
+    /// (empty by default: the forecast then says what happens if nobody turns the pots). A rotation policy or a
+    /// rotation calendar fills this to forecast its plan.</summary>
+    public ImmutableDictionary<string, ImmutableArray<RotationRecord>> PlannedRotations { get; init; } =
+        ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;
+
     /// <summary>How errors name the parts of the site (the site file reader passes its own); <see cref="SitePaths.Default"/> when null.</summary>
     public SitePaths? Paths { get; init; }
 }
