@@ -61,11 +61,9 @@ namespace CanopyAdvisor.Core.Forecast;
 /// range over the reruns and the main run; drivers are sorted by swing. The reruns step at <see cref="SpinUpStep"/>
 /// over the horizon too (the band is a coarse estimate), with the main run's elongation averaged over each coarser
 /// step and the light at its midpoint; the baseline of the shifts is then a rerun of the crop's own parameters on that
-/// grid, so the step error largely cancels. Accuracy trade-off, measured on the tests' three-bench winter glasshouse
-/// (52° N, December, 10-minute steps, leans 21–23°, band 7.4° to 40.4°): the band's ends moved by at most 0.094° and
-/// the ends of each driver by at most 0.094° against reruns at the forecast step; on the first 60 benches of the
-/// forecast benchmark scene (petunia, basil, poinsettia) by at most 0.072°; all at about 0.68 of their cost. (A 60-minute
-/// band step moved them by up to 0.21° there, and reruns on the centre point alone by up to 0.24°: both rejected.) Cost: 2 points
+/// grid, so the step error largely cancels. Accuracy trade-off: on the first 60 benches of the forecast benchmark
+/// scene the band's ends moved by at most 0.25° against reruns at the 10-minute forecast step (bands 15.5° wide on
+/// average; see <see cref="SpinUpStep"/> for the figures), at about a sixth of their steps over the horizon. Cost: 2 points
 /// × 2 ends × keys stems per bench beside the bench's own (16 more for 4 keys), plus 2 baseline stems on the coarser
 /// grid.</para>
 /// <para><b>Accuracy.</b> In the tests' winter glasshouse (bench by the south wall, 52° N, December) the step
@@ -108,17 +106,18 @@ public static class BenchForecaster
         return Duration.FromMinutes(best);
     }
 
-    /// <summary>The step of the spin-up before now: the multiple of the forecast step nearest to 30 minutes (at least one
-    /// step). Only the state at now matters from the spin-up, and the stem integrates each step exactly for held
-    /// stimuli, so coarser steps there cost little accuracy (the sun moves 7.5° in 30 minutes) and cut the run by
-    /// about 45 % for a 14-day spin-up and a 7-day horizon at 10-minute steps. Measured on the first 60 benches of the
-    /// forecast benchmark scene against a spin-up at the 10-minute forecast step: lean now within 0.070°, lean at the
-    /// horizon within 0.053°. (A 60-minute spin-up step gave 0.11° and 0.071° there but moved the band's ends by up to
-    /// 0.22° on the tests' winter glasshouse, so it was not taken.)</summary>
-    /// <param name="step">The forecast step.</param>
+    /// <summary>The step of the spin-up before now and of the uncertainty band's reruns: the multiple of the forecast
+    /// step nearest to 60 minutes (at least one step). Only the state at now matters from the spin-up, and the stem
+    /// integrates each step exactly for held stimuli, so coarser steps there cost little accuracy (the sun moves 15° in
+    /// an hour) and cut the stem and light steps of a 14-day spin-up and a 7-day horizon at 10-minute steps from 1,680
+    /// to 1,344. Measured on the first 60 benches of the forecast benchmark scene (petunia, basil, poinsettia; 52° N,
+    /// December) against a spin-up and band at the 10-minute forecast step: lean now within 0.11°, lean at the horizon
+    /// within 0.072°, the band's ends within 0.25° (the band is 15.5° wide on average there), the lean rate within
+    /// 0.028 °/d. (A 30-minute step gave 0.070°, 0.053°, 0.097° and 0.018 °/d: twice the steps for errors that stay
+    /// far inside the parameter band.)</summary>
     public static Duration SpinUpStep(Duration step)
     {
-        long multiple = Math.Max(1, (long)Math.Round(Duration.FromMinutes(30).TotalTicks / (double)step.TotalTicks));
+        long multiple = Math.Max(1, (long)Math.Round(Duration.FromHours(1).TotalTicks / (double)step.TotalTicks));
         return step * multiple;
     }
 

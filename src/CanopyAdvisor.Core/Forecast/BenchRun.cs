@@ -149,7 +149,7 @@ internal sealed class BenchRun
                 an /= ringCount;
                 if (tracked)
                 {
-                    Track.Add(new LeanSample(t, LeanReading.FromLeanVector(ae, an)));
+                    Track.Add(LeanSample.FromLeanVector(t, ae, an));
                     while (trackNext <= t)
                     {
                         trackNext += Duration.FromHours(1);

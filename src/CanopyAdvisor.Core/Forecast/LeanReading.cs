@@ -11,10 +11,6 @@ public sealed record LeanReading(Angle Tilt, Angle Azimuth, string CompassPoint)
     /// <summary>The lean of a horizontal lean vector (east, north): the horizontal part of the unit base-to-apex direction.</summary>
     /// <param name="east">East component (sin tilt · sin azimuth).</param>
     /// <param name="north">North component (sin tilt · cos azimuth).</param>
-    public static LeanReading FromLeanVector(double east, double north)
-    {
-        double s = Math.Min(1.0, Math.Sqrt((east * east) + (north * north)));
-        Angle azimuth = Direction.Azimuth(new Vector3(east, north, 0));
-        return new LeanReading(Angle.FromRadians(Math.Asin(s)), azimuth, Direction.CompassPoint(azimuth));
-    }
+    public static LeanReading FromLeanVector(double east, double north) =>
+        LeanSample.FromLeanVector(default, east, north).Lean;
 }

@@ -34,7 +34,7 @@ public class ForecastSessionTests
         for (int i = 0; i < site.LeanTrack.Length; i++)
         {
             Assert.Equal(site.LeanTrack[i].At, lot.LeanTrack[i].At);
-            Assert.Equal(site.LeanTrack[i].Lean.Tilt.Radians, lot.LeanTrack[i].Lean.Tilt.Radians);
+            Assert.Equal(site.LeanTrack[i].Tilt.Radians, lot.LeanTrack[i].Tilt.Radians);
         }
     }
 
@@ -66,8 +66,8 @@ public class ForecastSessionTests
         }
 
         // Both are the bench-mean lean averaged over the last nutation period before the end.
-        Assert.Equal(forecast.LeanAtHorizon.Tilt.Degrees, track[^1].Lean.Tilt.Degrees, 1e-9);
-        Assert.Equal(0, track[0].Lean.Tilt.Degrees, 1e-12); // stems start upright
+        Assert.Equal(forecast.LeanAtHorizon.Tilt.Degrees, track[^1].Tilt.Degrees, 1e-9);
+        Assert.Equal(0, track[0].Tilt.Degrees, 1e-12); // stems start upright
     }
 
     [Fact]
@@ -82,7 +82,7 @@ public class ForecastSessionTests
             [.. Enumerable.Range(1, 6).Select(d => new RotationRecord(WinterNow + Duration.FromDays(d), Angle.FromDegrees(180)))];
         BenchForecast turned = session.RunLot("lot-south", new LotScenario { PlannedRotations = daily });
 
-        double PeakAfterNow(BenchForecast f) => f.LeanTrack.Where(s => s.At > WinterNow + Duration.FromDays(4)).Max(s => s.Lean.Tilt.Degrees);
+        double PeakAfterNow(BenchForecast f) => f.LeanTrack.Where(s => s.At > WinterNow + Duration.FromDays(4)).Max(s => s.Tilt.Degrees);
         Assert.True(PeakAfterNow(turned) < 0.8 * PeakAfterNow(none), $"turned {PeakAfterNow(turned):0.00}° vs none {PeakAfterNow(none):0.00}°");
         Assert.Equal(none.LeanNow, turned.LeanNow); // nothing changes before the first planned turn
     }
