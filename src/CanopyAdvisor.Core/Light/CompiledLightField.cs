@@ -206,6 +206,8 @@ public sealed class CompiledLightField
         double dni = _hasSky ? outside.DirectNormalPpfd : 0;
         Vector3 sun = outside.SunDirection.Normalized();
         bool beam = _hasSky && !(dni <= 0) && sun.Z > 0;
+        var glasshouse = beam ? _enclosure as GlasshouseEnclosure : null;
+        SkyRay sunRay = glasshouse is not null ? glasshouse.Prepare(sun) : default; // the sun's cover terms, once per step
         const double DaylightBlue = ModelConstants.DaylightBlueFraction;
         const double DaylightRed660 = ModelConstants.DaylightRedFraction * RedWindowShare;
         const double DaylightFarRed730 = DaylightRed660 / ModelConstants.SunlightRedToFarRed;
@@ -218,7 +220,9 @@ public sealed class CompiledLightField
             if (beam)
             {
                 var position = new Vector3(_x[p], _y[p], _z[p]);
-                double e = _benchTops.BlocksRay(position, sun) ? 0 : dni * _enclosure.SkyTransmittance(position, sun);
+                double e = _benchTops.BlocksRay(position, sun)
+                    ? 0
+                    : dni * (glasshouse is not null ? glasshouse.SkyTransmittance(position, in sunRay) : _enclosure.SkyTransmittance(position, sun));
                 if (e > 0)
                 {
                     e *= CanopyTransmission(p, sun.X, sun.Y, sun.Z, double.PositiveInfinity);

@@ -96,6 +96,12 @@ public static class LightFieldCompiler
         var benchTops = new BenchTops(benches);
         HemisphereQuadrature? skyGrid = hasSky ? HemisphereQuadrature.Create(options.SkyZenithBands) : null;
 
+        // A glasshouse's per-direction cover terms are the same at every point: work them out once per direction.
+        var glasshouse = enclosure as GlasshouseEnclosure;
+        SkyRay[]? rays = glasshouse is not null && skyGrid is not null
+            ? [.. skyGrid.Directions.Select(glasshouse.Prepare)]
+            : null;
+
         Parallel.For(0, n, p =>
         {
             SamplePoint point = points[p];
@@ -104,7 +110,9 @@ public static class LightFieldCompiler
             AccumulateLamps(point.Position, canopy, lampData, enclosure, benchTops, contributions.AsSpan(p * groupCount * CompiledLightField.Stride, groupCount * CompiledLightField.Stride));
             if (skyGrid is not null)
             {
-                SkyView view = SkyViewIntegrator.Integrate(skyGrid, new PointSkyWeight(enclosure, benchTops, point.Position, canopy));
+                SkyView view = rays is not null
+                    ? SkyViewIntegrator.IntegrateIndexed(skyGrid, new PreparedSkyWeight(glasshouse!, rays, benchTops, point.Position, canopy))
+                    : SkyViewIntegrator.Integrate(skyGrid, new PointSkyWeight(enclosure, benchTops, point.Position, canopy));
                 skyF[p] = view.ViewFactor;
                 skyX[p] = view.SkyVector.X;
                 skyY[p] = view.SkyVector.Y;
@@ -413,6 +421,16 @@ public static class LightFieldCompiler
             benchTops.BlocksRay(position, towardSky)
                 ? 0
                 : enclosure.SkyTransmittance(position, towardSky) * canopy.Transmission(towardSky, double.PositiveInfinity);
+    }
+
+    /// <summary>The same weight as <see cref="PointSkyWeight"/> through a glasshouse whose per-direction terms were
+    /// prepared once (<see cref="GlasshouseEnclosure.Prepare"/>; the same values, bit for bit).</summary>
+    private readonly struct PreparedSkyWeight(GlasshouseEnclosure enclosure, SkyRay[] rays, BenchTops benchTops, Vector3 position, PointCanopy canopy) : IIndexedSkyWeight
+    {
+        public double Weight(int index, Vector3 towardSky) =>
+            benchTops.BlocksRay(position, towardSky)
+                ? 0
+                : enclosure.SkyTransmittance(position, in rays[index]) * canopy.Transmission(towardSky, double.PositiveInfinity);
     }
 
     /// <summary>One point's canopy geometry, for the transmission of many directions.</summary>

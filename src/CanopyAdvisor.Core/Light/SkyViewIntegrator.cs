@@ -19,7 +19,18 @@ public static class SkyViewIntegrator
     /// <returns>f, v and s.</returns>
     /// <exception cref="ArgumentOutOfRangeException">The weight returned a value outside [0, 1] or NaN.</exception>
     public static SkyView Integrate<TWeight>(HemisphereQuadrature quadrature, TWeight weight)
-        where TWeight : struct, ISkyViewWeight
+        where TWeight : struct, ISkyViewWeight =>
+        IntegrateIndexed(quadrature, new ByDirection<TWeight>(weight));
+
+    /// <summary>Integrates a weight that is told each direction's index in <paramref name="quadrature"/> (so it can use
+    /// per-direction terms worked out once for many points).</summary>
+    /// <typeparam name="TWeight">A struct implementing <see cref="IIndexedSkyWeight"/>.</typeparam>
+    /// <param name="quadrature">The directions and their cell integrals.</param>
+    /// <param name="weight">Weight per direction, in [0, 1].</param>
+    /// <returns>f, v and s.</returns>
+    /// <exception cref="ArgumentOutOfRangeException">The weight returned a value outside [0, 1] or NaN.</exception>
+    internal static SkyView IntegrateIndexed<TWeight>(HemisphereQuadrature quadrature, TWeight weight)
+        where TWeight : struct, IIndexedSkyWeight
     {
         ArgumentNullException.ThrowIfNull(quadrature);
         ReadOnlySpan<Vector3> directions = quadrature.DirectionSpan;
@@ -30,7 +41,7 @@ public static class SkyViewIntegrator
         double sumX = 0, sumY = 0, sumZ = 0, sumSolid = 0;
         for (int i = 0; i < directions.Length; i++)
         {
-            double w = weight.Weight(directions[i]);
+            double w = weight.Weight(i, directions[i]);
             if (!(w >= 0 && w <= 1))
             {
                 throw new ArgumentOutOfRangeException(nameof(weight), w, "A sky weight must lie in [0, 1].");
@@ -72,6 +83,13 @@ public static class SkyViewIntegrator
     {
         ArgumentNullException.ThrowIfNull(enclosure);
         return Integrate(quadrature, new EnclosureWeight(enclosure, point));
+    }
+
+    /// <summary>A weight of directions alone, asked through the indexed form.</summary>
+    private readonly struct ByDirection<TWeight>(TWeight weight) : IIndexedSkyWeight
+        where TWeight : struct, ISkyViewWeight
+    {
+        public double Weight(int index, Vector3 towardSky) => weight.Weight(towardSky);
     }
 
     private readonly struct DelegateWeight(Func<Vector3, double> weight) : ISkyViewWeight

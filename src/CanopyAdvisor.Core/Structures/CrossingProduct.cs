@@ -1,5 +1,3 @@
-using CanopyAdvisor.Core.Glazing;
-
 namespace CanopyAdvisor.Core.Structures;
 
 /// <summary>
@@ -8,36 +6,40 @@ namespace CanopyAdvisor.Core.Structures;
 /// </summary>
 /// <remarks>
 /// Of coincident hits the one the ray crosses most squarely (largest |cos θ|; on a tie the lower transmittance) is kept: the ray passes through the
-/// shared edge, and that facet is the one it would cross for any nearby ray that is not grazing. Mutable value type
-/// used as a local; allocation-free.
+/// shared edge, and that facet is the one it would cross for any nearby ray that is not grazing. Each crossing comes
+/// with its transmittance already worked out (the caller's cover optics at |cos θ|, 0 for an opaque facet), so a
+/// direction shared by many points needs its Fresnel terms only once. Mutable value type used as a local;
+/// allocation-free.
 /// </remarks>
 internal struct CrossingProduct
 {
     private double product;
-    private bool blocked;
     private bool pending;
     private double pendingDistance;
     private double pendingCosine;
-    private GlazingOptics pendingOptics;
+    private double pendingTransmittance;
 
     public CrossingProduct() => product = 1;
 
-    /// <summary>Whether an opaque crossing has been committed (the result is then 0).</summary>
-    public readonly bool Blocked => blocked;
+    /// <summary>Whether a crossing that lets nothing through (an opaque facet) has been committed: the result is 0.</summary>
+    public readonly bool Blocked => product == 0;
 
     /// <summary>Offers a crossing at ray distance <paramref name="distance"/> (not before the last one offered).</summary>
-    public void Add(double distance, double cosine, in GlazingOptics optics, double coincidence)
+    /// <param name="distance">Distance along the ray, metres.</param>
+    /// <param name="cosine">Cosine between the ray and the facet normal (sign ignored).</param>
+    /// <param name="transmittance">The facet's transmittance at that cosine, in [0, 1] (0 for an opaque facet).</param>
+    /// <param name="coincidence">Hits closer than this to the previous one are the same crossing.</param>
+    public void Add(double distance, double cosine, double transmittance, double coincidence)
     {
         double c = Math.Abs(cosine);
         if (pending && distance - pendingDistance <= coincidence)
         {
             // Squarer crossing wins; on a tie (a ray through a corner at equal angles) the darker one, so that
             // the result does not depend on the order the hits were found in.
-            if (c > pendingCosine + 1e-12
-                || (c >= pendingCosine - 1e-12 && optics.TransmittanceAtCosine(c) < pendingOptics.TransmittanceAtCosine(pendingCosine)))
+            if (c > pendingCosine + 1e-12 || (c >= pendingCosine - 1e-12 && transmittance < pendingTransmittance))
             {
                 pendingCosine = c;
-                pendingOptics = optics;
+                pendingTransmittance = transmittance;
             }
 
             return;
@@ -47,14 +49,14 @@ internal struct CrossingProduct
         pending = true;
         pendingDistance = distance;
         pendingCosine = c;
-        pendingOptics = optics;
+        pendingTransmittance = transmittance;
     }
 
-    /// <summary>The product of all crossings offered; 0 if any kept crossing is opaque.</summary>
+    /// <summary>The product of the committed crossings' transmittances (0 when blocked).</summary>
     public double Result()
     {
         Commit();
-        return blocked ? 0 : product;
+        return product;
     }
 
     private void Commit()
@@ -65,13 +67,6 @@ internal struct CrossingProduct
         }
 
         pending = false;
-        if (pendingOptics.Opaque)
-        {
-            blocked = true;
-        }
-        else
-        {
-            product *= pendingOptics.TransmittanceAtCosine(pendingCosine);
-        }
+        product *= pendingTransmittance;
     }
 }

@@ -157,17 +157,26 @@ public sealed class GlasshouseEnclosure : IEnclosure
     /// <param name="origin">The point, site frame, metres.</param>
     /// <param name="towardSky">Direction toward the sky (normalised here if it is not a unit vector).</param>
     /// <returns>A fraction in [0, 1].</returns>
-    public double SkyTransmittance(Vector3 origin, Vector3 towardSky)
+    public double SkyTransmittance(Vector3 origin, Vector3 towardSky) => SkyTransmittance(origin, Ray(towardSky, prepared: false));
+
+    /// <summary>A direction toward the sky with the envelope's per-direction terms (the cover transmittances of the
+    /// roof planes and the walls it would cross) worked out once, for <see cref="SkyTransmittance(Vector3, in SkyRay)"/>
+    /// from many points: the quadrature directions of every sample point, the sun at every point of a step.</summary>
+    /// <param name="towardSky">Direction toward the sky (normalised here if it is not a unit vector).</param>
+    internal SkyRay Prepare(Vector3 towardSky) => Ray(towardSky, prepared: true);
+
+    /// <summary>The same as <see cref="SkyTransmittance(Vector3, Vector3)"/> for a prepared direction (the same result,
+    /// bit for bit: the prepared transmittances are the ones the unprepared call works out per crossing).</summary>
+    /// <param name="origin">The point, site frame, metres.</param>
+    /// <param name="ray">The direction, prepared by <see cref="Prepare"/> of this enclosure.</param>
+    internal double SkyTransmittance(Vector3 origin, in SkyRay ray)
     {
-        double squared = towardSky.LengthSquared;
-        if (!(towardSky.Z > 0 && towardSky.Z * towardSky.Z > HorizonCosine * HorizonCosine * squared))
+        if (!ray.AboveHorizon)
         {
             return 0;
         }
 
-        // Quadrature and sun directions are unit vectors already; normalise only when needed (saves a square root
-        // and three divisions on the hot path).
-        Vector3 d = Math.Abs(squared - 1) < 1e-12 ? towardSky : towardSky / Math.Sqrt(squared);
+        Vector3 d = ray.Direction;
         if (obstructions.Count > 0 && obstructions.Blocks(origin, d, double.PositiveInfinity))
         {
             return 0;
@@ -176,7 +185,39 @@ public sealed class GlasshouseEnclosure : IEnclosure
         Vector3 r = origin - corner;
         double u0 = Vector3.Dot(r, axis);
         double v0 = Vector3.Dot(r, across);
-        return ContainsLocal(u0, v0, origin.Z) ? unshadedFraction * EnvelopeTransmittance(origin, d, u0, v0) : 1;
+        return ContainsLocal(u0, v0, origin.Z) ? unshadedFraction * EnvelopeTransmittance(origin, ray, u0, v0) : 1;
+    }
+
+    private SkyRay Ray(Vector3 towardSky, bool prepared)
+    {
+        double squared = towardSky.LengthSquared;
+        if (!(towardSky.Z > 0 && towardSky.Z * towardSky.Z > HorizonCosine * HorizonCosine * squared))
+        {
+            return default;
+        }
+
+        // Quadrature and sun directions are unit vectors already; normalise only when needed (saves a square root
+        // and three divisions on the hot path).
+        Vector3 d = Math.Abs(squared - 1) < 1e-12 ? towardSky : towardSky / Math.Sqrt(squared);
+        double du = Vector3.Dot(d, axis);
+        double dv = Vector3.Dot(d, across);
+        du = Math.Abs(du) < ParallelCosine ? 0 : du; // a ray along a wall plane does not cross it (as in FacetGeometry)
+        dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
+        double leftCosine = (d.Z * cosSlope) - (dv * sinSlope);
+        double rightCosine = (d.Z * cosSlope) + (dv * sinSlope);
+        if (!prepared)
+        {
+            return new SkyRay(d, du, dv, leftCosine, rightCosine);
+        }
+
+        return new SkyRay(d, du, dv, leftCosine, rightCosine)
+        {
+            Prepared = true,
+            RoofLeft = roofOptics.TransmittanceAtCosine(leftCosine),
+            RoofRight = roofOptics.TransmittanceAtCosine(rightCosine),
+            AlongWall = (du > 0 ? backOptics : frontOptics).TransmittanceAtCosine(du),
+            AcrossWall = (dv > 0 ? rightOptics : leftOptics).TransmittanceAtCosine(dv),
+        };
     }
 
     /// <summary>Whether an opaque envelope facet or an obstruction lies on the segment between two points (ends excluded).</summary>
@@ -228,13 +269,12 @@ public sealed class GlasshouseEnclosure : IEnclosure
     /// adjacent and merged. Equivalent to <see cref="EnvelopeTransmittanceByFacets"/> (checked by a property test) but
     /// costs O(bays crossed) instead of O(facets).
     /// </remarks>
-    private double EnvelopeTransmittance(Vector3 origin, Vector3 d, double u0, double v0)
+    private double EnvelopeTransmittance(Vector3 origin, in SkyRay ray, double u0, double v0)
     {
+        Vector3 d = ray.Direction;
         double z0 = origin.Z;
-        double du = Vector3.Dot(d, axis);
-        double dv = Vector3.Dot(d, across);
-        du = Math.Abs(du) < ParallelCosine ? 0 : du; // a ray along a wall plane does not cross it (as in FacetGeometry)
-        dv = Math.Abs(dv) < ParallelCosine ? 0 : dv;
+        double du = ray.Du;
+        double dv = ray.Dv;
         double dz = d.Z;
 
         // Where the ray leaves the footprint's vertical prism; nothing of the envelope lies beyond.
@@ -256,8 +296,8 @@ public sealed class GlasshouseEnclosure : IEnclosure
         last = step > 0 ? Math.Max(last, first) : Math.Min(last, first); // rounding must not send the walk backward
         double leftDenominator = dz - (roofRise * dv);
         double rightDenominator = dz + (roofRise * dv);
-        double leftCosine = (dz * cosSlope) - (dv * sinSlope);
-        double rightCosine = (dz * cosSlope) + (dv * sinSlope);
+        double leftCosine = ray.LeftCosine;
+        double rightCosine = ray.RightCosine;
         for (int i = first; ; i += step)
         {
             double bayStart = i * bay;
@@ -305,7 +345,10 @@ public sealed class GlasshouseEnclosure : IEnclosure
                     continue; // the origin is on this plane and the ray does not leave the envelope through it
                 }
 
-                crossings.Add(t, cosine, roofOptics, CoincidenceM);
+                double transmittance = ray.Prepared
+                    ? (left ? ray.RoofLeft : ray.RoofRight)
+                    : roofOptics.TransmittanceAtCosine(cosine);
+                crossings.Add(t, cosine, transmittance, CoincidenceM);
                 if (crossings.Blocked)
                 {
                     return 0;
@@ -327,12 +370,14 @@ public sealed class GlasshouseEnclosure : IEnclosure
                 // At a corner both walls are offered; the crossing keeps the squarer one.
                 if (tAlong <= tAcross + CoincidenceM)
                 {
-                    crossings.Add(tEnd, du, du > 0 ? backOptics : frontOptics, CoincidenceM);
+                    double transmittance = ray.Prepared ? ray.AlongWall : (du > 0 ? backOptics : frontOptics).TransmittanceAtCosine(du);
+                    crossings.Add(tEnd, du, transmittance, CoincidenceM);
                 }
 
                 if (tAcross <= tAlong + CoincidenceM && zEnd <= gutter + InsideToleranceM)
                 {
-                    crossings.Add(tEnd, dv, dv > 0 ? rightOptics : leftOptics, CoincidenceM);
+                    double transmittance = ray.Prepared ? ray.AcrossWall : (dv > 0 ? rightOptics : leftOptics).TransmittanceAtCosine(dv);
+                    crossings.Add(tEnd, dv, transmittance, CoincidenceM);
                 }
             }
         }
@@ -367,7 +412,7 @@ public sealed class GlasshouseEnclosure : IEnclosure
         var crossings = new CrossingProduct();
         foreach ((double t, double cosine, int facet) in hits.OrderBy(h => h.T))
         {
-            crossings.Add(t, cosine, facets[facet].Optics, CoincidenceM);
+            crossings.Add(t, cosine, facets[facet].Optics.TransmittanceAtCosine(cosine), CoincidenceM);
         }
 
         return crossings.Result();

@@ -47,6 +47,9 @@ public sealed class EnvelopeEquivalenceTests
             double fast = enclosure.SkyTransmittance(p, d);
             double reference = (1 - house.StructuralShading) * enclosure.EnvelopeTransmittanceByFacets(p, d);
             Assert.True(Math.Abs(fast - reference) < 1e-12, $"p = {p}, d = {d}: fast {fast}, facets {reference} (rise {ridgeRise})");
+
+            // A direction prepared once for many points gives the same number, bit for bit.
+            Assert.Equal(fast, enclosure.SkyTransmittance(p, enclosure.Prepare(d)));
         }
     }
 }
