@@ -15,6 +15,14 @@ public abstract class BeamDistribution
     /// <summary>Intensity per unit flux, sr⁻¹, toward a direction given by its polar angle and angle about the axis (radians).</summary>
     public abstract double IntensityPerUnitFlux(double polarRadians, double aroundRadians);
 
+    /// <summary>The same intensity, with the polar angle given by its cosine (the form a point–lamp geometry yields
+    /// directly); distributions that are functions of cos θ answer without an arc cosine. Agrees with
+    /// <see cref="IntensityPerUnitFlux"/> at θ = acos(<paramref name="cosPolar"/>) to rounding.</summary>
+    /// <param name="cosPolar">Cosine of the angle from the optical axis, in [−1, 1].</param>
+    /// <param name="aroundRadians">Angle about the axis from the photometric reference direction.</param>
+    public virtual double IntensityPerUnitFluxAtCosine(double cosPolar, double aroundRadians) =>
+        IntensityPerUnitFlux(Math.Acos(cosPolar), aroundRadians);
+
     /// <summary>True when the intensity does not depend on the angle about the axis.</summary>
     public abstract bool IsAxiallySymmetric { get; }
 }

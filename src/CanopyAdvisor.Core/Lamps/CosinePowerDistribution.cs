@@ -64,9 +64,13 @@ public sealed class CosinePowerDistribution : BeamDistribution
     }
 
     /// <inheritdoc />
-    public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians)
+    public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians) =>
+        IntensityPerUnitFluxAtCosine(Math.Cos(polarRadians), aroundRadians);
+
+    /// <inheritdoc />
+    public override double IntensityPerUnitFluxAtCosine(double cosPolar, double aroundRadians)
     {
-        double c = Math.Cos(polarRadians);
+        double c = cosPolar;
         if (!(c > 0))
         {
             // n = 0 is a uniform hemisphere: on the boundary itself (c = 0) the value is taken as 0, a set of measure zero.

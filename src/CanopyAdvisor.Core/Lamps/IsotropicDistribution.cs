@@ -17,4 +17,7 @@ public sealed class IsotropicDistribution : BeamDistribution
 
     /// <inheritdoc />
     public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians) => IntensityValue;
+
+    /// <inheritdoc />
+    public override double IntensityPerUnitFluxAtCosine(double cosPolar, double aroundRadians) => IntensityValue;
 }

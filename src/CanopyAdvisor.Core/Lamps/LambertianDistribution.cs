@@ -16,7 +16,9 @@ public sealed class LambertianDistribution : BeamDistribution
     /// <inheritdoc />
     public override double IntensityPerUnitFlux(double polarRadians, double aroundRadians)
     {
-        double c = Math.Cos(polarRadians);
-        return c > 0 ? c / Math.PI : 0.0;
+        return IntensityPerUnitFluxAtCosine(Math.Cos(polarRadians), aroundRadians);
     }
+
+    /// <inheritdoc />
+    public override double IntensityPerUnitFluxAtCosine(double cosPolar, double aroundRadians) => cosPolar > 0 ? cosPolar / Math.PI : 0.0;
 }

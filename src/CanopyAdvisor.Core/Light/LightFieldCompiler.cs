@@ -164,7 +164,7 @@ public static class LightFieldCompiler
                 }
             }
 
-            double intensity = lamp.Distribution.IntensityPerUnitFlux(Math.Acos(cosPolar), around);
+            double intensity = lamp.Distribution.IntensityPerUnitFluxAtCosine(cosPolar, around);
             if (!(intensity > 0))
             {
                 continue;

@@ -28,6 +28,24 @@ public class DistributionTests
         _ => throw new ArgumentOutOfRangeException(nameof(name)),
     };
 
+    [Theory]
+    [MemberData(nameof(Names))]
+    public void The_intensity_at_a_cosine_is_the_intensity_at_its_angle(string name)
+    {
+        // Definition: I(cos θ) and I(θ) describe the same distribution; the cosine form only skips an arc cosine.
+        BeamDistribution distribution = Make(name);
+        for (int p = 0; p <= 180; p += 3)
+        {
+            for (int a = 0; a < 360; a += 45)
+            {
+                double polar = p * Math.PI / 180, around = a * Math.PI / 180;
+                double byAngle = distribution.IntensityPerUnitFlux(polar, around);
+                double byCosine = distribution.IntensityPerUnitFluxAtCosine(Math.Cos(polar), around);
+                Assert.True(Math.Abs(byAngle - byCosine) <= 1e-12 * Math.Max(1, Math.Abs(byAngle)), $"{name} at θ = {p}°, C = {a}°: {byAngle} vs {byCosine}");
+            }
+        }
+    }
+
     internal static TabulatedDistribution TabulatedFrom(Func<double, double, double> f, double polarStepDeg, double aroundStepDeg, double lastPolarDeg)
     {
         int np = (int)Math.Round(lastPolarDeg / polarStepDeg) + 1;
