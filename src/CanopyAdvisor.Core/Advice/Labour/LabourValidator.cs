@@ -21,6 +21,18 @@ public static class LabourValidator
     /// <summary>Most people in one crew, 100.</summary>
     public const int MaxPeople = 100;
 
+    /// <summary>Longest task window accepted, 366 days (a rotation is due within days; a guard against wrong dates).</summary>
+    public const int MaxWindowDays = 366;
+
+    /// <summary>Most labour accepted for one task, 1,000 person-hours (a bench is turned in one go, on one day; a guard).</summary>
+    public const int MaxTaskLabourHours = 1000;
+
+    /// <summary>Earliest instant a task window may touch, 1900-01-01T00:00Z (a guard against unset dates).</summary>
+    public static Instant EarliestAccepted { get; } = Instant.FromUtc(1900, 1, 1, 0, 0);
+
+    /// <summary>Latest instant a task window may touch, 2200-01-01T00:00Z (a guard against unset dates).</summary>
+    public static Instant LatestAccepted { get; } = Instant.FromUtc(2200, 1, 1, 0, 0);
+
     /// <summary>All the labour settings: times, crews (at least one, unique ids) and holidays (no repeats).</summary>
     /// <param name="settings">The settings.</param>
     /// <param name="path">Path of the settings, usually <c>labour</c>.</param>
@@ -148,8 +160,9 @@ public static class LabourValidator
     }
 
     /// <summary>
-    /// A task: ids not empty, the window's end not before its start, at least one pot, labour &gt; 0, an angle within
-    /// (−360°, 360°) and not 0 (as for rotations done, site file reference).
+    /// A task: ids not empty, the window within the years 1900–2199, its end not before its start and at most 366 days
+    /// after it, at least one pot, labour within (0, 1000 h], an angle within (−360°, 360°) and not 0 (as for rotations
+    /// done, site file reference).
     /// </summary>
     public static IReadOnlyList<ValidationError> CheckTask(RotationTask task, string path)
     {
@@ -180,11 +193,25 @@ public static class LabourValidator
             errors.Add(new($"{path}.lotId", "must not be empty"));
         }
 
+        bool inRange = true;
+        foreach ((string name, Instant at) in new[] { ("earliest", task.Earliest), ("latest", task.Latest) })
+        {
+            if (at < EarliestAccepted || at > LatestAccepted)
+            {
+                inRange = false;
+                errors.Add(new($"{path}.{name}", $"must be within [1900-01-01, 2200-01-01] UTC, got {InstantPattern.General.Format(at)}"));
+            }
+        }
+
         if (task.Latest < task.Earliest)
         {
             errors.Add(new(
                 $"{path}.latest",
                 $"must not be before earliest ({InstantPattern.General.Format(task.Earliest)}), got {InstantPattern.General.Format(task.Latest)}"));
+        }
+        else if (inRange && task.Latest - task.Earliest > Duration.FromDays(MaxWindowDays))
+        {
+            errors.Add(new($"{path}.latest", $"the window must be at most {MaxWindowDays} days long, got {Format((task.Latest - task.Earliest).TotalDays)} days"));
         }
 
         if (task.Pots < 1)
@@ -192,9 +219,11 @@ public static class LabourValidator
             errors.Add(new($"{path}.pots", $"must be ≥ 1, got {task.Pots}"));
         }
 
-        if (task.Labour <= Duration.Zero)
+        if (task.Labour <= Duration.Zero || task.Labour > Duration.FromHours(MaxTaskLabourHours))
         {
-            errors.Add(new($"{path}.labour", $"must be > 0, got {task.Labour.TotalMinutes.ToString("0.###", CultureInfo.InvariantCulture)} min"));
+            errors.Add(new(
+                $"{path}.labour",
+                $"must be > 0 and at most {MaxTaskLabourHours} h, got {task.Labour.TotalMinutes.ToString("0.###", CultureInfo.InvariantCulture)} min"));
         }
 
         double deg = task.Angle.Degrees;

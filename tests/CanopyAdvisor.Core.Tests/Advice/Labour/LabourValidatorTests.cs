@@ -53,7 +53,7 @@ public class LabourValidatorTests
     public static TheoryData<string, RotationTask, string, string> BadTasks() => new()
     {
         { "window end before its start", GoodTask with { Latest = Instant.FromUtc(2026, 12, 6, 0, 0) }, "tasks[0].latest", "must not be before earliest (2026-12-07T00:00:00Z), got 2026-12-06T00:00:00Z" },
-        { "negative duration", GoodTask with { Labour = Duration.FromMinutes(-5) }, "tasks[0].labour", "must be > 0, got -5 min" },
+        { "negative duration", GoodTask with { Labour = Duration.FromMinutes(-5) }, "tasks[0].labour", "must be > 0 and at most 1000 h, got -5 min" },
         { "zero duration", GoodTask with { Labour = Duration.Zero }, "tasks[0].labour", "must be > 0" },
         { "no pots", GoodTask with { Pots = 0 }, "tasks[0].pots", "must be ≥ 1, got 0" },
         { "angle 0 (site file reference: not 0)", GoodTask with { Angle = Angle.Zero }, "tasks[0].angleDeg", "must be within (−360, 360) and not 0, got 0" },
@@ -62,6 +62,10 @@ public class LabourValidatorTests
         { "empty bench", GoodTask with { BenchId = "" }, "tasks[0].benchId", "must not be empty" },
         { "empty lot", GoodTask with { LotId = "" }, "tasks[0].lotId", "must not be empty" },
         { "empty site", GoodTask with { SiteId = "" }, "tasks[0].siteId", "must not be empty" },
+        { "unset start (default instant is 1970, fine; MinValue is not)", GoodTask with { Earliest = Instant.MinValue }, "tasks[0].earliest", "must be within [1900-01-01, 2200-01-01] UTC" },
+        { "window of two years (guard: 366 days)", GoodTask with { Latest = Instant.FromUtc(2028, 12, 7, 0, 0) }, "tasks[0].latest", "the window must be at most 366 days long, got 731 days" },
+        { "labour of 2000 h (guard: 1000 h)", GoodTask with { Labour = Duration.FromHours(2000) }, "tasks[0].labour", "at most 1000 h" },
+        { "labour Duration.MaxValue", GoodTask with { Labour = Duration.MaxValue }, "tasks[0].labour", "at most 1000 h" },
     };
 
     [Theory]
