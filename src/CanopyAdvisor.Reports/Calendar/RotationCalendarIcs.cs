@@ -11,8 +11,8 @@ namespace CanopyAdvisor.Reports.Calendar;
 /// <summary>The rotation calendar as an iCalendar file (RFC 5545), one event per scheduled rotation task.</summary>
 /// <remarks>
 /// <para>
-/// The file is a VCALENDAR with VERSION 2.0, our PRODID, CALSCALE GREGORIAN and METHOD PUBLISH (a calendar to
-/// subscribe to or import, RFC 5546 §3.2.1), and one VEVENT per scheduled task with UID, DTSTAMP, SEQUENCE, DTSTART,
+/// The file is a VCALENDAR with VERSION 2.0, our PRODID, CALSCALE GREGORIAN, METHOD PUBLISH (a calendar to
+/// subscribe to or import, RFC 5546 §3.2.1) and a NAME (RFC 7986 §5.1), and one VEVENT per scheduled task with UID, DTSTAMP, SEQUENCE, DTSTART,
 /// DTEND, SUMMARY, DESCRIPTION and LOCATION. Lines end in CRLF and are folded at 75 octets without splitting a UTF-8
 /// character (§3.1); text values are escaped (§3.3.11).
 /// </para>
@@ -60,6 +60,7 @@ public static class RotationCalendarIcs
         Line("PRODID:" + ProductId);
         Line("CALSCALE:GREGORIAN");
         Line("METHOD:PUBLISH");
+        Line("NAME:" + ICalendarText.EscapeText($"Rotation calendar: {site.Name}"));
         foreach (ScheduledTask task in schedule.Scheduled)
         {
             RotationTask t = task.Task;

@@ -37,6 +37,7 @@ public partial class RotationCalendarIcsTests
         Assert.Equal("END:VCALENDAR", lines[^1]);
         Assert.Single(lines, l => l == "VERSION:2.0");
         Assert.Single(lines, l => l == "PRODID:" + RotationCalendarIcs.ProductId);
+        Assert.Single(lines, l => l == "NAME:Rotation calendar: " + site.Name.Replace(",", "\\,", StringComparison.Ordinal)); // RFC 7986 §5.1
 
         // §3.6.1: in each VEVENT, UID and DTSTAMP are required and occur once; DTSTART is required as well (METHOD is set,
         // and RFC 5546 §3.2.1 PUBLISH asks for DTSTART); DTEND at most once.

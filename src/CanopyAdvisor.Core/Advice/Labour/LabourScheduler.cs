@@ -195,13 +195,16 @@ public static class LabourScheduler
                         continue;
                     }
 
-                    Instant start = Zone.ResolveLocal(date.At(crew.Start), Lenient).ToInstant();
-                    Instant end = Zone.ResolveLocal(date.At(crew.End), Lenient).ToInstant();
+                    LocalDateTime from = date.At(crew.Start);
+                    LocalDateTime to = date.At(crew.End);
+                    Instant start = Zone.ResolveLocal(from, Lenient).ToInstant();
+                    Instant end = Zone.ResolveLocal(to, Lenient).ToInstant();
+                    bool clockChange = end - start != crew.ShiftLength || Zone.MapLocal(from).Count != 1 || Zone.MapLocal(to).Count != 1;
 
                     // Both times can land on the same instant or cross when a gap swallows one of them: then no working time.
                     if (end > start)
                     {
-                        days.Add(new CrewDay(c, crew, date, start, end));
+                        days.Add(new CrewDay(c, crew, date, start, end, clockChange));
                     }
                 }
             }
@@ -214,7 +217,7 @@ public static class LabourScheduler
     }
 
     /// <summary>One crew's working day: its instants and nominal capacity.</summary>
-    private sealed record CrewDay(int CrewIndex, Crew Crew, LocalDate Date, Instant Start, Instant End)
+    private sealed record CrewDay(int CrewIndex, Crew Crew, LocalDate Date, Instant Start, Instant End, bool ClockChange)
     {
         public Duration Capacity => (End - Start) * Crew.People;
     }
@@ -475,7 +478,7 @@ public static class LabourScheduler
                     foreach (CrewDay day in problem.Calendar.On(d))
                     {
                         int count = slots.TryGetValue(day, out List<Slot>? s) ? s.Count : 0;
-                        days.Add(new DailyLoad(d, day.Crew.Id, crewLoad.GetValueOrDefault(day, Duration.Zero), day.Capacity, count));
+                        days.Add(new DailyLoad(d, day.Crew.Id, crewLoad.GetValueOrDefault(day, Duration.Zero), day.Capacity, count, day.ClockChange));
                     }
                 }
             }

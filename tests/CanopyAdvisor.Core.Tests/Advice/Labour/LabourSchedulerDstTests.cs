@@ -47,15 +47,16 @@ public class LabourSchedulerDstTests
     }
 
     [Theory]
-    // Capacity is the real length of the working day (MODEL.md §0, lenient resolution).
-    [InlineData("Europe/Amsterdam", 2027, 3, 27, 0, 0, 8, 0, 8.0)] // an ordinary day
-    [InlineData("Europe/Amsterdam", 2027, 3, 28, 0, 0, 8, 0, 7.0)] // 00:00 CET (23:00Z) to 08:00 CEST (06:00Z): an hour lost
-    [InlineData("Europe/Amsterdam", 2027, 10, 31, 0, 0, 8, 0, 9.0)] // 00:00 CEST (22:00Z) to 08:00 CET (07:00Z): an hour gained
-    [InlineData("Europe/Amsterdam", 2027, 3, 28, 2, 30, 8, 0, 4.5)] // 02:30 is in the gap, moves to 03:30 CEST (01:30Z); to 06:00Z
-    [InlineData("Europe/Amsterdam", 2027, 10, 31, 2, 30, 6, 0, 4.5)] // 02:30 is ambiguous, earlier = CEST (00:30Z); 06:00 CET = 05:00Z
-    [InlineData("America/Chicago", 2027, 3, 14, 0, 0, 8, 0, 7.0)] // 00:00 CST (06:00Z) to 08:00 CDT (13:00Z)
-    [InlineData("America/Chicago", 2027, 11, 7, 0, 0, 8, 0, 9.0)] // 00:00 CDT (05:00Z) to 08:00 CST (14:00Z)
-    public void Capacity_is_the_real_length_of_the_working_day(string zoneId, int year, int month, int day, int sh, int sm, int eh, int em, double hours)
+    // Capacity is the real length of the working day (MODEL.md §0, lenient resolution); the day is flagged when a change touches it.
+    [InlineData("Europe/Amsterdam", 2027, 3, 27, 0, 0, 8, 0, 8.0, false)] // an ordinary day
+    [InlineData("Europe/Amsterdam", 2027, 3, 28, 0, 0, 8, 0, 7.0, true)] // 00:00 CET (23:00Z) to 08:00 CEST (06:00Z): an hour lost
+    [InlineData("Europe/Amsterdam", 2027, 3, 28, 7, 0, 15, 0, 8.0, false)] // the change is at 02:00, before the crew starts
+    [InlineData("Europe/Amsterdam", 2027, 10, 31, 0, 0, 8, 0, 9.0, true)] // 00:00 CEST (22:00Z) to 08:00 CET (07:00Z): an hour gained
+    [InlineData("Europe/Amsterdam", 2027, 3, 28, 2, 30, 8, 0, 4.5, true)] // 02:30 is in the gap, moves to 03:30 CEST (01:30Z); to 06:00Z
+    [InlineData("Europe/Amsterdam", 2027, 10, 31, 2, 30, 6, 0, 4.5, true)] // 02:30 is ambiguous, earlier = CEST (00:30Z); 06:00 CET = 05:00Z
+    [InlineData("America/Chicago", 2027, 3, 14, 0, 0, 8, 0, 7.0, true)] // 00:00 CST (06:00Z) to 08:00 CDT (13:00Z)
+    [InlineData("America/Chicago", 2027, 11, 7, 0, 0, 8, 0, 9.0, true)] // 00:00 CDT (05:00Z) to 08:00 CST (14:00Z)
+    public void Capacity_is_the_real_length_of_the_working_day(string zoneId, int year, int month, int day, int sh, int sm, int eh, int em, double hours, bool clockChange)
     {
         DateTimeZone zone = DateTimeZoneProviders.Tzdb[zoneId];
         LabourSettings settings = Daily(sh, sm, eh, em);
@@ -63,7 +64,9 @@ public class LabourSchedulerDstTests
 
         LabourSchedule s = LabourScheduler.Schedule([task], settings, zone);
 
-        Assert.Equal(Duration.FromHours(hours), Assert.Single(s.Days).Capacity);
+        DailyLoad load = Assert.Single(s.Days);
+        Assert.Equal(Duration.FromHours(hours), load.Capacity);
+        Assert.Equal(clockChange, load.ClockChange);
     }
 
     [Fact]
