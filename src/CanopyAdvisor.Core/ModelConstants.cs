@@ -31,6 +31,18 @@ public static class ModelConstants
     /// <summary>Seconds per day of 24 hours (86 400; a Julian day, Reda &amp; Andreas 2004).</summary>
     public const double SecondsPerDay = 86400.0;
 
+    /// <summary>
+    /// Default hand time to turn one pot on a bench, 3 s (estimate, from memory: a worker turning small pots in place
+    /// manages roughly 1,000–1,500 pots an hour; unverified). Sites set their own in the site file's <c>labour</c> section.
+    /// </summary>
+    public const double DefaultSecondsPerPot = 3.0;
+
+    /// <summary>
+    /// Default set-up time per bench rotation task, 10 min (estimate, from memory: walking to the bench, opening the aisle of
+    /// rolling benches and closing it again; unverified). Sites set their own in the site file's <c>labour</c> section.
+    /// </summary>
+    public const double DefaultSetUpMinutesPerBench = 10.0;
+
     /// <summary>Micromoles per mole.</summary>
     public const double MicromolesPerMole = 1e6;
 

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using CanopyAdvisor.Core.Advice.Labour;
 using NodaTime;
 
 namespace CanopyAdvisor.Core.Sites;
@@ -36,4 +37,7 @@ public sealed record Site(
 
     /// <summary>The electricity price, for the cost of added lamp energy; <see cref="EnergyTariff.Unknown"/> when not given.</summary>
     public EnergyTariff Tariff { get; init; } = EnergyTariff.Unknown;
+
+    /// <summary>Who turns pots and how long it takes, for the rotation calendar; <see cref="LabourSettings.Default"/> when not given.</summary>
+    public LabourSettings Labour { get; init; } = LabourSettings.Default;
 }

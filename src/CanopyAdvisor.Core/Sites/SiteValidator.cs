@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using System.Globalization;
+using CanopyAdvisor.Core.Advice.Labour;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Validation;
@@ -14,7 +15,8 @@ namespace CanopyAdvisor.Core.Sites;
 /// Two kinds of check: the range of each value (sizes &gt; 0, fractions in [0, 1], latitude within ±90°, …) and the
 /// geometry of the parts together (benches inside the structure and under its gutters or ceiling, lamps inside
 /// the structure and outside every canopy, benches apart, bays filling the structure's width, unique ids), plus the crop
-/// lots against their benches and dates and the temperature setpoints. Paths use the site
+/// lots against their benches and dates, the temperature setpoints, the tariff and the labour settings
+/// (<see cref="LabourValidator.CheckSettings"/>). Paths use the site
 /// file's names (see <see cref="SitePaths"/>). The same problem reported for several lamps that share a type or
 /// several surfaces that share a cover is listed once.
 /// </para>
@@ -141,6 +143,7 @@ public static class SiteValidator
 
         errors.AddRange(CheckTemperatures(site.Temperatures, "temperatures"));
         errors.AddRange(CheckTariff(site.Tariff, "tariff"));
+        errors.AddRange(LabourValidator.CheckSettings(site.Labour, "labour"));
         for (int i = 0; i < site.Lots.Length; i++)
         {
             errors.AddRange(CheckLot(site.Lots[i], LotPath(i), site.Benches, site.Zone));

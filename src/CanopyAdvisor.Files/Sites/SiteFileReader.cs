@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
+using CanopyAdvisor.Core.Advice.Labour;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Sites;
@@ -16,7 +17,7 @@ namespace CanopyAdvisor.Files.Sites;
 /// Every problem is reported, each with a path in the file's own names (<c>benches[3].footprint.widthM: must be &gt; 0</c>):
 /// malformed JSON (with line and byte), wrong JSON types, missing required and unknown properties, unknown time
 /// zones, lamp and cover types, dates and times not in ISO-8601 form, and then every range and geometry rule of
-/// <see cref="SiteValidator"/> (lots and temperature setpoints included). On any problem the reader throws
+/// <see cref="SiteValidator"/> (lots, temperature setpoints, tariff and labour settings included). On any problem the reader throws
 /// <see cref="InvalidInputException"/> with all of them; it never returns a partly built site.
 /// </para>
 /// <para>
@@ -42,6 +43,10 @@ public sealed class SiteFileReader
 
     // An indoor room has no sky: its weather is never used. A file may still give one; otherwise this fills the slot.
     private static readonly WeatherSettings IndoorWeather = new(SiteValidator.MinLinkeTurbidity, 1);
+
+    // Working days in the site file, Monday first: ISO 8601 numbers the days Monday = 1 … Sunday = 7 but names none; these
+    // are short English names, and a day's number is its place in this list plus one.
+    private static readonly string[] DayNames = ["mon", "tue", "wed", "thu", "fri", "sat", "sun"];
 
     private readonly IBeamFactory beams;
 
@@ -160,6 +165,7 @@ public sealed class SiteFileReader
             ReadObstructions(root);
             TemperatureSetpoints temperatures = ReadTemperatures(root);
             EnergyTariff tariff = ReadTariff(root);
+            LabourSettings labour = ReadLabour(root);
             ReadLots(root, zone);
             root.Finish();
 
@@ -178,6 +184,7 @@ public sealed class SiteFileReader
                 Lots = [.. lots],
                 Temperatures = temperatures,
                 Tariff = tariff,
+                Labour = labour,
             };
             var paths = new SitePaths(
                 i => benchPaths[i],
@@ -768,6 +775,108 @@ public sealed class SiteFileReader
             string? currency = o.Text("currency");
             o.Finish();
             return new EnergyTariff(Num(price), currency ?? string.Empty);
+        }
+
+        private LabourSettings ReadLabour(JsonObjectReader root)
+        {
+            JsonObjectReader? o = root.Object("labour", required: false);
+            if (o is null)
+            {
+                return LabourSettings.Default;
+            }
+
+            double secondsPerPot = o.Number("secondsPerPot", required: false)
+                ?? (o.Has("secondsPerPot") ? double.NaN : LabourSettings.Default.SecondsPerPot);
+            double setUp = o.Number("setUpMinutesPerBench", required: false)
+                ?? (o.Has("setUpMinutesPerBench") ? double.NaN : LabourSettings.Default.SetUpMinutesPerBench);
+            var crews = new List<Crew>();
+            IReadOnlyList<(JsonElement Item, string Path)>? items = o.Array("crews");
+            if (items is null)
+            {
+                // Missing (reported as required) or not an array (reported): the draft's "at least one crew" is then dropped.
+                unknown.Add(o.PathOf("crews"));
+            }
+
+            foreach ((JsonElement item, string path) in items ?? [])
+            {
+                crews.Add(ReadCrew(item, path));
+            }
+
+            var holidays = new List<LocalDate>();
+            IReadOnlyList<(JsonElement Item, string Path)>? days = o.Array("holidays", required: false);
+            foreach ((JsonElement item, string path) in days ?? [])
+            {
+                if (item.ValueKind == JsonValueKind.String && LocalDatePattern.Iso.Parse(item.GetString()!) is { Success: true } parsed)
+                {
+                    holidays.Add(parsed.Value);
+                }
+                else
+                {
+                    errors.Add(new(path, $"must be a date \"YYYY-MM-DD\", got {JsonObjectReader.Describe(item)}"));
+                }
+            }
+
+            o.Finish();
+            return new LabourSettings(secondsPerPot, setUp, [.. crews], [.. holidays]);
+        }
+
+        private Crew ReadCrew(JsonElement item, string path)
+        {
+            // The validator names crews by index (labour.crews[i]); keep one draft crew per item so the indices match.
+            JsonObjectReader? o = JsonObjectReader.Open(item, path, errors);
+            if (o is null)
+            {
+                unknown.Add(path);
+                return new Crew(string.Empty, string.Empty, 1, [IsoDayOfWeek.Monday], LocalTime.Midnight, LocalTime.Noon);
+            }
+
+            string? id = o.Text("id");
+            string? name = o.Text("name", required: false);
+            // A people count that could not be read is reported there; the draft takes 1 so nothing more is said about it.
+            int people = o.Integer("people", required: false) ?? 1;
+
+            var workingDays = new List<IsoDayOfWeek>();
+            IReadOnlyList<(JsonElement Item, string Path)>? days = o.Array("days");
+            foreach ((JsonElement day, string dayPath) in days ?? [])
+            {
+                IsoDayOfWeek? d = day.ValueKind == JsonValueKind.String ? DayOfWeek(day.GetString()!) : null;
+                if (d is IsoDayOfWeek known)
+                {
+                    workingDays.Add(known);
+                }
+                else
+                {
+                    errors.Add(new(dayPath, $"must be a day of the week, one of {string.Join(", ", DayNames)}; got {JsonObjectReader.Describe(day)}"));
+                    unknown.Add(o.PathOf("days"));
+                }
+            }
+
+            if (days is null)
+            {
+                unknown.Add(o.PathOf("days"));
+            }
+
+            LocalTime? start = ReadTime(o, "start");
+            LocalTime? end = ReadTime(o, "end");
+            o.Finish();
+            if (start is null || end is null)
+            {
+                unknown.Add(o.PathOf("end"));
+            }
+
+            return new Crew(
+                id ?? string.Empty,
+                name ?? id ?? string.Empty,
+                people,
+                [.. workingDays],
+                start ?? LocalTime.Midnight,
+                end ?? LocalTime.Noon);
+        }
+
+        private static IsoDayOfWeek? DayOfWeek(string name)
+        {
+            int index = Array.IndexOf(DayNames, name);
+            return index < 0 ? null : (IsoDayOfWeek)(index + 1);
         }
 
         private void ReadLots(JsonObjectReader root, DateTimeZone? zone)

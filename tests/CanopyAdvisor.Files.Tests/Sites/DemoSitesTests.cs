@@ -1,3 +1,4 @@
+using CanopyAdvisor.Core.Advice.Labour;
 using CanopyAdvisor.Core.Lamps;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Validation;
@@ -163,5 +164,22 @@ public class DemoSitesTests
         Assert.All(site.Lots, l => Assert.InRange(Period.Between(l.PlantedOn, l.SaleOn, PeriodUnits.Days).Days, 7, 21));
         Assert.Equal(new TemperatureSetpoints(22, 20, 0, 0), site.Temperatures);
         Assert.All(site.Lots, l => Assert.True(l.HeightMm / 1000 <= site.Benches.Single(b => b.Id == l.BenchId).Canopy.HeightM, l.Id));
+    }
+
+    [Fact]
+    public void Demo_sites_carry_their_crews_and_holidays()
+    {
+        // README "Demo sites" (invented demo data): a bench team of three Monday–Friday 07:00–15:30 and a Saturday crew in
+        // the glasshouse; a day shift of two and a weekend crew in the indoor farm; Christmas and New Year's Day off.
+        LabourSettings glasshouse = Load("glasshouse").Labour;
+        LabourSettings farm = Load("indoor-farm").Labour;
+
+        Assert.Equal(["bench-team", "saturday-crew"], glasshouse.Crews.Select(c => c.Id));
+        Assert.Equal((3, new LocalTime(7, 0), new LocalTime(15, 30)), (glasshouse.Crews[0].People, glasshouse.Crews[0].Start, glasshouse.Crews[0].End));
+        Assert.Equal(Crew.Weekdays.AsEnumerable(), glasshouse.Crews[0].WorkingDays.AsEnumerable());
+        Assert.Equal([IsoDayOfWeek.Saturday], glasshouse.Crews[1].WorkingDays.AsEnumerable());
+        Assert.Equal([new LocalDate(2026, 12, 25), new LocalDate(2026, 12, 26), new LocalDate(2027, 1, 1)], glasshouse.Holidays.AsEnumerable());
+        Assert.Equal(["day-shift", "weekend"], farm.Crews.Select(c => c.Id));
+        Assert.Equal([new LocalDate(2026, 12, 25), new LocalDate(2027, 1, 1)], farm.Holidays.AsEnumerable());
     }
 }

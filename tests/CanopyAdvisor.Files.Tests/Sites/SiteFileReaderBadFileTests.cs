@@ -150,6 +150,24 @@ public class SiteFileReaderBadFileTests
         { "currency in lower case (ISO 4217)", G, "tariff.currency", "\"eur\"", "tariff.currency", "must be an ISO 4217 code of three capital letters" },
         { "currency symbol (ISO 4217)", G, "tariff.currency", "\"€\"", "tariff.currency", "must be an ISO 4217 code of three capital letters" },
 
+        // Labour (README "labour"; one case per rule).
+        { "no crews (README: at least one)", G, "labour.crews", "[]", "labour.crews", "must list at least one crew" },
+        { "crews missing (README: required)", G, "labour.crews", SiteJson.Remove, "labour.crews", "is required" },
+        { "seconds per pot 0 (README: (0, 600])", G, "labour.secondsPerPot", "0", "labour.secondsPerPot", "must be within (0, 600] s, got 0" },
+        { "negative set-up (README: [0, 240])", G, "labour.setUpMinutesPerBench", "-5", "labour.setUpMinutesPerBench", "must be within [0, 240] min, got -5" },
+        { "crew ends before it starts (README: end after start)", G, "labour.crews[0].end", "\"06:00\"", "labour.crews[0].end", "must be after start (07:00), got 06:00" },
+        { "crew end not a time (ISO 8601 24 h clock)", G, "labour.crews[0].end", "\"24:00\"", "labour.crews[0].end", "must be a local time \"HH:mm\"" },
+        { "no people (README: [1, 100])", G, "labour.crews[0].people", "0", "labour.crews[0].people", "must be within [1, 100], got 0" },
+        { "people as a fraction (README: a count)", G, "labour.crews[0].people", "1.5", "labour.crews[0].people", "must be an integer, got 1.5" },
+        { "no working days (README: at least one)", G, "labour.crews[0].days", "[]", "labour.crews[0].days", "must name at least one working day" },
+        { "a day twice (README: no repeats)", G, "labour.crews[0].days", "[\"mon\", \"mon\"]", "labour.crews[0].days[1]", "Monday is listed twice" },
+        { "unknown day name (README: mon … sun)", G, "labour.crews[0].days[0]", "\"monday\"", "labour.crews[0].days[0]", "must be a day of the week, one of mon, tue, wed, thu, fri, sat, sun; got the string \"monday\"" },
+        { "duplicate crew id (README: unique)", G, "labour.crews[1].id", "\"team\"", "labour.crews[1].id", "duplicate crew id 'team' (first used at labour.crews[0])" },
+        { "empty crew id (README: non-empty)", G, "labour.crews[0].id", "\"\"", "labour.crews[0].id", "must not be empty" },
+        { "holiday not a date (ISO 8601 calendar date)", G, "labour.holidays[0]", "\"25/12/2026\"", "labour.holidays[0]", "must be a date \"YYYY-MM-DD\", got the string \"25/12/2026\"" },
+        { "holiday twice (README: no repeats)", G, "labour.holidays[1]", "\"2026-12-25\"", "labour.holidays[1]", "2026-12-25 is listed twice (first at labour.holidays[0])" },
+        { "misspelt crew field (README: no unknown names)", G, "labour.crews[0].peple", "2", "labour.crews[0].peple", "unknown property; did you mean 'people'?" },
+
         // The shape of the file (README: format).
         { "unknown property (README: no unknown names)", G, "benches[0].colour", "2", "benches[0].colour", "unknown property (expected one of: canopy, footprint, id," },
         { "misspelt property gets a hint (README: no unknown names)", G, "benches[0].footprint.widhtM", "2", "benches[0].footprint.widhtM", "unknown property; did you mean 'widthM'?" },

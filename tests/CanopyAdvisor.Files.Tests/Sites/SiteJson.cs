@@ -8,7 +8,7 @@ namespace CanopyAdvisor.Files.Tests.Sites;
 /// <summary>Small valid site files for tests, and a way to change one value in them by its path.</summary>
 internal static partial class SiteJson
 {
-    /// <summary>A two-bay glasshouse, 20 m × 16 m, one bench, one side lamp, one row of three toplights, one obstruction, setpoints and one lot.</summary>
+    /// <summary>A two-bay glasshouse, 20 m × 16 m, one bench, one side lamp, one row of three toplights, one obstruction, setpoints, tariff, labour and one lot.</summary>
     public const string Glasshouse = """
         {
           "formatVersion": 1,
@@ -54,6 +54,14 @@ internal static partial class SiteJson
           ],
           "temperatures": { "dayC": 20, "nightC": 17, "preDawnDropC": 3, "preDawnDropHours": 2 },
           "tariff": { "pricePerKWh": 0.2, "currency": "EUR" },
+          "labour": {
+            "secondsPerPot": 3, "setUpMinutesPerBench": 10,
+            "crews": [
+              { "id": "team", "name": "bench team", "people": 2, "days": ["mon", "tue", "wed", "thu", "fri"], "start": "07:00", "end": "15:30" },
+              { "id": "sat", "days": ["sat"], "start": "08:00", "end": "12:00" }
+            ],
+            "holidays": ["2026-12-25", "2027-01-01"]
+          },
           "lots": [
             { "id": "lot-1", "benchId": "b1", "crop": "petunia-compact", "plantedOn": "2026-11-20", "saleOn": "2027-01-15",
               "heightMm": 60, "measuredOn": "2026-12-01", "spacingM": 0.12, "pots": 800,

@@ -63,6 +63,17 @@ public class SiteSchemaTests
     [InlineData("temperatures.dayC", "46", "day setpoint range")]
     [InlineData("temperatures.preDawnDropHours", "13", "drop hours range")]
     [InlineData("temperatures.nightC", SiteJson.Remove, "night setpoint required")]
+    [InlineData("labour.crews", "[]", "at least one crew")]
+    [InlineData("labour.secondsPerPot", "0", "seconds per pot > 0")]
+    [InlineData("labour.setUpMinutesPerBench", "241", "set-up at most 240 min")]
+    [InlineData("labour.crews[0].people", "0", "at least one person")]
+    [InlineData("labour.crews[0].days", "[]", "at least one working day")]
+    [InlineData("labour.crews[0].days", "[\"mon\", \"mon\"]", "no day twice")]
+    [InlineData("labour.crews[0].days[0]", "\"monday\"", "short day names")]
+    [InlineData("labour.crews[0].start", "\"7:00\"", "time form")]
+    [InlineData("labour.crews[0].end", SiteJson.Remove, "crew needs its end")]
+    [InlineData("labour.holidays[0]", "\"25 Dec\"", "holiday date form")]
+    [InlineData("labour.overtime", "1", "no unknown labour field")]
     public void Schema_and_reader_reject_the_same_change(string path, string valueJson, string label)
     {
         string json = SiteJson.With(SiteJson.Glasshouse, (path, valueJson));
