@@ -107,7 +107,7 @@ public static class OutlookPage
         }
 
         html.Append("</li>\n");
-        html.Append(Invariant($"<li>{Escape(OutlookPalette.Symbol(OutlookRisk.Watch))} On watch (lean at week end at least {OutlookRanking.WatchShareOfLimit:P0} of the grade limit, or its range reaching the limit): {watch.Count}"));
+        html.Append(Invariant($"<li>{Escape(OutlookPalette.Symbol(OutlookRisk.Watch))} On watch (lean at week end at least {100 * OutlookRanking.WatchShareOfLimit:0}% of the grade limit, or its range reaching the limit): {watch.Count}"));
         if (watch.Count > 0)
         {
             html.Append(": ").Append(Escape(string.Join(", ", watch.Select(b => b.BenchId))));
@@ -198,7 +198,7 @@ public static class OutlookPage
             html.Append(Invariant($"<td class=\"risk risk-{risk}\">{Escape(OutlookPalette.Symbol(b.Risk))} {Escape(OutlookPalette.Label(b.Risk))}</td>"));
             html.Append(Invariant($"<th scope=\"row\">{Escape(b.BenchId)}</th><td>{Escape(b.CropName)}<br/><span class=\"note\">lot {Escape(f.LotId)}, sale {b.SaleOn:d MMM}</span></td>"));
             html.Append(Invariant($"<td class=\"num\">{f.LeanNow.Tilt.Degrees:0.0}°</td><td class=\"num\">{f.LeanAtHorizon.Tilt.Degrees:0.0}°{range}</td>"));
-            html.Append(Invariant($"<td class=\"num\">{b.ShareOfLimit:P0} of {f.LeanGradeLimit.Degrees:0.#}°</td><td>{Escape(direction)}</td>"));
+            html.Append(Invariant($"<td class=\"num\">{100 * b.ShareOfLimit:0}% of {f.LeanGradeLimit.Degrees:0.#}°</td><td>{Escape(direction)}</td>"));
             html.Append(Invariant($"<td class=\"num\">{Escape(OutlookText.Signed(f.LeanRateDegreesPerDay, "0.00"))}</td><td>{Escape(OutlookText.LeavesGrade(f, report.Now, zone))}</td>"));
             string flags = b.StretchFlags.Length > 0 ? string.Join("; ", b.StretchFlags.Select(OutlookText.Flag)) : "none";
             html.Append(Invariant($"<td>{Escape(flags)}</td><td>{Escape(b.Advice?.Recommendation ?? "not planned")}</td><td>{Escape(ChangeShort(b, report.Change is not null))}</td></tr>\n"));
@@ -356,7 +356,7 @@ public static class OutlookPage
         }
 
         html.Append("<li>The forecast rests on crop parameters that are mostly estimates with plausible ranges; the range in the table and the bars in the charts show how far the lean at week end moves when each parameter is set to the ends of its range, one at a time (not a joint confidence interval). Measure lean on a few benches to calibrate them.</li>\n");
-        html.Append(Invariant($"<li>Risk classes: leaves grade — the bench crosses its crop’s lean grade limit before the week end or its sale; watch — lean at week end at least {OutlookRanking.WatchShareOfLimit:P0} of the limit (our own threshold) or its range reaching the limit; low — otherwise.</li>\n"));
+        html.Append(Invariant($"<li>Risk classes: leaves grade — the bench crosses its crop’s lean grade limit before the week end or its sale; watch — lean at week end at least {100 * OutlookRanking.WatchShareOfLimit:0}% of the limit (our own threshold) or its range reaching the limit; low — otherwise.</li>\n"));
         html.Append("<li>Stretch flags: low DLI, low R:FR (phytochrome state), high DIF, or height at sale over the crop’s height grade limit; each is shown with its value and limit.</li>\n");
         html.Append("</ul>\n</section>\n");
     }
