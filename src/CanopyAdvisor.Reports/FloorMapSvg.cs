@@ -285,7 +285,12 @@ public static class FloorMapSvg
         svg.Append(Invariant($"<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"{-lengthPx:0.#}\" stroke=\"{c}\" stroke-width=\"3\" stroke-linecap=\"round\"/>"));
         svg.Append(Invariant($"<polygon points=\"0,{-lengthPx - 8:0.#} -5,{-lengthPx:0.#} 5,{-lengthPx:0.#}\" fill=\"{c}\"/></g>\n"));
         string label = tilt < 0.05 ? "vertical" : Invariant($"{tilt:0.0}° {Direction.CompassPoint(layer.ArrowAzimuth)}");
-        svg.Append(Invariant($"<text x=\"{x0 + 6:0.#}\" y=\"{y0 + 16:0.#}\" fill=\"{c}\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(label)}</text>\n"));
+
+        // The label sits behind the arrow's tail (opposite to where it points), so the two never cross.
+        double ex = Math.Sin(layer.ArrowAzimuth.Radians), sy = -Math.Cos(layer.ArrowAzimuth.Radians);
+        string anchor = ex > 0.3 ? "end" : ex < -0.3 ? "start" : "middle";
+        double lx = x0 - (8 * ex), ly = y0 - (12 * sy) + 4;
+        svg.Append(Invariant($"<text x=\"{lx:0.#}\" y=\"{ly:0.#}\" text-anchor=\"{anchor}\" fill=\"{c}\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(label)}</text>\n"));
     }
 
     private static void AppendNorthAndScale(StringBuilder svg, Frame frame)

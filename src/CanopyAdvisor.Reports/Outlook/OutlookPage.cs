@@ -103,21 +103,21 @@ public static class OutlookPage
         html.Append(Invariant($"<li><strong>{Escape(OutlookPalette.Symbol(OutlookRisk.LeavesGrade))} Leave grade this week: {leaving.Count}</strong>"));
         if (leaving.Count > 0)
         {
-            html.Append(": ").Append(Escape(string.Join(", ", leaving.Select(b => $"{b.BenchId} ({OutlookText.LeavesGrade(b.Forecast, report.Now, zone)})"))));
+            html.Append(" (").Append(Escape(string.Join(", ", leaving.Select(b => $"{b.BenchId}: {OutlookText.LeavesGrade(b.Forecast, report.Now, zone)}")))).Append(')');
         }
 
         html.Append("</li>\n");
-        html.Append(Invariant($"<li>{Escape(OutlookPalette.Symbol(OutlookRisk.Watch))} On watch (lean at week end at least {100 * OutlookRanking.WatchShareOfLimit:0}% of the grade limit, or its range reaching the limit): {watch.Count}"));
+        html.Append(Invariant($"<li>{Escape(OutlookPalette.Symbol(OutlookRisk.Watch))} On watch: {watch.Count}"));
         if (watch.Count > 0)
         {
-            html.Append(": ").Append(Escape(string.Join(", ", watch.Select(b => b.BenchId))));
+            html.Append(" (").Append(Escape(string.Join(", ", watch.Select(b => b.BenchId)))).Append(')');
         }
 
-        html.Append("</li>\n");
+        html.Append(Invariant($" — lean at week end at least {100 * OutlookRanking.WatchShareOfLimit:0}% of the grade limit, or its range reaching the limit</li>\n"));
         html.Append(Invariant($"<li>Stretch flags on {stretch.Count} bench(es)"));
         if (stretch.Count > 0)
         {
-            html.Append(": ").Append(Escape(string.Join("; ", stretch.Select(b => $"{b.BenchId}: {string.Join(", ", b.StretchFlags.Select(f => OutlookText.Cause(f.Cause)))}"))));
+            html.Append(" (").Append(Escape(string.Join("; ", stretch.Select(b => $"{b.BenchId}: {string.Join(", ", b.StretchFlags.Select(f => OutlookText.Cause(f.Cause)))}")))).Append(')');
         }
 
         html.Append("</li>\n");
