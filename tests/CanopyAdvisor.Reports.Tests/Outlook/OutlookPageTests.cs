@@ -139,6 +139,32 @@ public partial class OutlookPageTests
         Assert.True(points[0][1] > limitY && points[^1][1] > limitY);
     }
 
+    [Fact]
+    public void Leaves_grade_line_stands_at_its_time()
+    {
+        // south-3 leaves grade 3 days into the 7-day week; the plot spans x = 40 … 286 px (330 px wide, 40 px left and
+        // 44 px right margins), so the line stands at 40 + 246 × 3/7 = 145.43 px.
+        XDocument doc = Parse(OutlookPage.Render(Report()));
+        XElement chart = doc.Descendants(Svg + "svg").Single(s => (string?)s.Attribute("data-bench") == "south-3");
+        XElement line = chart.Descendants(Svg + "line").Single(l => (string?)l.Attribute("class") == "leaves-grade");
+        Assert.Equal(145.4, double.Parse((string)line.Attribute("x1")!, CultureInfo.InvariantCulture), 6);
+        Assert.Contains("crosses the limit Sat 5 Dec 08:00", chart.Element(Svg + "desc")!.Value, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_week_across_the_spring_clock_change_keeps_its_local_days()
+    {
+        // Europe/Amsterdam moves from +01:00 to +02:00 on Sunday 28 March 2027 (EU summer-time rule: last Sunday of
+        // March). 168 h from Fri 26 Mar 08:00 +01:00 end on Fri 2 Apr 09:00 +02:00: eight local dates are touched.
+        Instant now = Instant.FromUtc(2027, 3, 26, 7, 0);
+        var forecast = new Core.Forecast.SiteForecast(now, now + Duration.FromDays(7), Duration.FromMinutes(12), [], 0, 0);
+        OutlookReport report = OutlookReport.Build(new OutlookInput(OutlookFixture.Site, forecast, OutlookFixture.Crops, []));
+        Assert.Equal(Enumerable.Range(0, 8).Select(d => new LocalDate(2027, 3, 26).PlusDays(d)), report.Days);
+        Assert.Equal("2027-W12", report.WeekLabel); // ISO 8601: week 1 of 2027 starts Monday 4 January
+        XDocument doc = Parse(OutlookPage.Render(report));
+        Assert.Contains("to Fri 2 Apr 09:00", doc.Descendants(Html + "p").First().Value, StringComparison.Ordinal);
+    }
+
     [GeneratedRegex(@"translate\((?<x>[-\d.]+) (?<y>[-\d.]+)\) rotate\((?<a>[-\d.]+)\)")]
     private static partial Regex ArrowTransform();
 
