@@ -83,10 +83,18 @@ public static class FloorMapSvg
             svg.Append(Invariant($"<desc>{Escape(description)}</desc>\n"));
         }
 
-        AppendPatterns(svg, map.Categories);
+        // Every category a bench uses gets its pattern, listed or not; the legend shows the listed ones, else those used.
+        List<FloorMapCategory> used = [.. map.Categories.Concat(benches.Where(b => b?.Category is not null).Select(b => b!.Category!)).DistinctBy(c => c.Key)];
+        if (map.Categories.Count == 0 && used.Count > 0)
+        {
+            map = map with { Categories = used };
+        }
+
+        AppendPatterns(svg, used);
         svg.Append("<rect width=\"100%\" height=\"100%\" fill=\"#fbfaf6\"/>\n");
         svg.Append(Invariant($"<text x=\"{MarginPx}\" y=\"24\" font-size=\"16\" font-weight=\"bold\">{Escape(title)}</text>\n"));
 
+        double pxPerDegree = ArrowScale(site, levels, benches, first.PxPerM);
         Frame frame = first;
         for (int l = 0; l < levels.Count; l++)
         {
@@ -119,14 +127,14 @@ public static class FloorMapSvg
             {
                 if (benches[b] is FloorMapBench layer)
                 {
-                    AppendArrow(svg, frame, site.Benches[b], layer, map.ArrowColour);
+                    AppendArrow(svg, frame, site.Benches[b], layer, map.ArrowColour, pxPerDegree);
                 }
             }
         }
 
         frame = first with { Top = MarginPx + 20, HeightPx = mapHeightPx };
         AppendNorthAndScale(svg, frame);
-        AppendLegend(svg, frame, low, high, map);
+        AppendLegend(svg, frame, low, high, map, pxPerDegree);
         svg.Append("</svg>\n");
         return svg.ToString();
     }
@@ -202,6 +210,11 @@ public static class FloorMapSvg
             {
                 svg.Append(Invariant($"<text x=\"{x:0.#}\" y=\"{y:0.#}\" text-anchor=\"middle\" font-size=\"11\" font-weight=\"bold\" fill=\"#1f2a33\">{Escape(c.Label)}</text>\n"));
                 y += 13;
+                if (double.IsFinite(layer.ArrowTilt.Degrees))
+                {
+                    svg.Append(Invariant($"<text x=\"{x:0.#}\" y=\"{y:0.#}\" text-anchor=\"middle\" font-size=\"11\" fill=\"#1f2a33\">{Escape(ArrowLabel(layer))}</text>\n"));
+                    y += 13;
+                }
             }
 
             if (layer.Badge is string badge)
@@ -211,7 +224,7 @@ public static class FloorMapSvg
         }
     }
 
-    private static void AppendPatterns(StringBuilder svg, IReadOnlyList<FloorMapCategory> categories)
+    private static void AppendPatterns(StringBuilder svg, List<FloorMapCategory> categories)
     {
         if (categories.Count == 0)
         {
@@ -262,7 +275,7 @@ public static class FloorMapSvg
         }
     }
 
-    private static void AppendArrow(StringBuilder svg, Frame frame, Bench bench, FloorMapBench layer, string colour)
+    private static void AppendArrow(StringBuilder svg, Frame frame, Bench bench, FloorMapBench layer, string colour, double pxPerDegree)
     {
         Vector3 centre = Centre(bench.Footprint);
         double tilt = layer.ArrowTilt.Degrees;
@@ -271,8 +284,8 @@ public static class FloorMapSvg
             return;
         }
 
-        // 4 px per degree of tilt, at least a stub, at most 120 px: long enough to read, short enough to stay near its bench.
-        double lengthPx = Math.Clamp(4 * tilt, 6, 120);
+        // One scale for the whole map (so lengths compare), at least a stub, at most 120 px.
+        double lengthPx = Math.Clamp(pxPerDegree * tilt, 6, 120);
         double x0 = frame.X(centre), y0 = frame.Y(centre);
 
         // Drawn pointing north (up, −y) and turned by the compass bearing: SVG's rotate(a) turns clockwise on screen
@@ -284,13 +297,45 @@ public static class FloorMapSvg
         svg.Append(Invariant($"<polygon points=\"0,{-lengthPx - 10:0.#} -7,{-lengthPx + 1:0.#} 7,{-lengthPx + 1:0.#}\" fill=\"#ffffff\"/>"));
         svg.Append(Invariant($"<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"{-lengthPx:0.#}\" stroke=\"{c}\" stroke-width=\"3\" stroke-linecap=\"round\"/>"));
         svg.Append(Invariant($"<polygon points=\"0,{-lengthPx - 8:0.#} -5,{-lengthPx:0.#} 5,{-lengthPx:0.#}\" fill=\"{c}\"/></g>\n"));
-        string label = tilt < 0.05 ? "vertical" : Invariant($"{tilt:0.0}° {Direction.CompassPoint(layer.ArrowAzimuth)}");
+        if (layer.Category is not null)
+        {
+            // A categorised bench prints its arrow label with its other words under the bench (see AppendBench).
+            return;
+        }
 
         // The label sits behind the arrow's tail (opposite to where it points), so the two never cross.
         double ex = Math.Sin(layer.ArrowAzimuth.Radians), sy = -Math.Cos(layer.ArrowAzimuth.Radians);
         string anchor = ex > 0.3 ? "end" : ex < -0.3 ? "start" : "middle";
         double lx = x0 - (8 * ex), ly = y0 - (12 * sy) + 4;
-        svg.Append(Invariant($"<text x=\"{lx:0.#}\" y=\"{ly:0.#}\" text-anchor=\"{anchor}\" fill=\"{c}\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(label)}</text>\n"));
+        svg.Append(Invariant($"<text x=\"{lx:0.#}\" y=\"{ly:0.#}\" text-anchor=\"{anchor}\" fill=\"{c}\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(ArrowLabel(layer))}</text>\n"));
+    }
+
+    private static string ArrowLabel(FloorMapBench layer) =>
+        layer.ArrowTilt.Degrees < 0.05 ? "vertical" : Invariant($"{layer.ArrowTilt.Degrees:0.0}° {Direction.CompassPoint(layer.ArrowAzimuth)}");
+
+    /// <summary>Pixels per degree of arrow tilt: 4, or less when the longest arrow would reach past 60 % of the way to
+    /// the nearest other bench of its level, so arrows of neighbouring benches do not run into each other.</summary>
+    private static double ArrowScale(Site site, List<Level> levels, IReadOnlyList<FloorMapBench?> benches, double pxPerM)
+    {
+        double scale = 4;
+        foreach (Level level in levels)
+        {
+            foreach (int b in level.Benches)
+            {
+                if (benches[b] is not FloorMapBench layer || !(layer.ArrowTilt.Degrees > 0))
+                {
+                    continue;
+                }
+
+                Vector3 centre = Centre(site.Benches[b].Footprint);
+                double nearestPx = level.Benches.Where(o => o != b)
+                    .Select(o => (Centre(site.Benches[o].Footprint) - centre).Length * pxPerM)
+                    .DefaultIfEmpty(double.PositiveInfinity).Min();
+                scale = Math.Min(scale, 0.6 * nearestPx / layer.ArrowTilt.Degrees);
+            }
+        }
+
+        return Math.Max(scale, 0.5);
     }
 
     private static void AppendNorthAndScale(StringBuilder svg, Frame frame)
@@ -304,7 +349,7 @@ public static class FloorMapSvg
         svg.Append(Invariant($"<text x=\"{MarginPx}\" y=\"{sy + 16}\">{metres:0.##} m</text>\n"));
     }
 
-    private static void AppendLegend(StringBuilder svg, Frame frame, double low, double high, FloorMap map)
+    private static void AppendLegend(StringBuilder svg, Frame frame, double low, double high, FloorMap map, double pxPerDegree)
     {
         double x = MarginPx + 140, y = frame.Top + frame.HeightPx + 20, w = 280, h = 12;
         if (map.Categories.Count > 0)
@@ -341,6 +386,13 @@ public static class FloorMapSvg
         double ax = map.Categories.Count > 0 ? x : x + w + 24, ay = map.Categories.Count > 0 ? y + h + 42 : y + 10;
         svg.Append(Invariant($"<text x=\"{ax}\" y=\"{ay}\" fill=\"{Escape(map.ArrowColour)}\" font-weight=\"bold\">→ {Escape(map.ArrowLegend)}</text>\n"));
         svg.Append(Invariant($"<text x=\"{ax}\" y=\"{ay + 18}\" fill=\"#6b6b6b\">● overhead lamp</text><text x=\"{ax + 126}\" y=\"{ay + 18}\" fill=\"#d9822b\">▲ side lamp</text>\n"));
+
+        // A reference arrow gives the length scale: 10° (or 5° when 10° would be longer than the 120 px cap).
+        double referenceDeg = pxPerDegree * 10 <= 120 ? 10 : 5;
+        double rl = Math.Min(pxPerDegree * referenceDeg, 120), ry = ay + 34;
+        string colour = Escape(map.ArrowColour);
+        svg.Append(Invariant($"<g class=\"arrow-scale\"><line x1=\"{ax}\" y1=\"{ry}\" x2=\"{ax + rl:0.#}\" y2=\"{ry}\" stroke=\"{colour}\" stroke-width=\"3\"/><polygon points=\"{ax + rl + 8:0.#},{ry} {ax + rl:0.#},{ry - 5} {ax + rl:0.#},{ry + 5}\" fill=\"{colour}\"/>"));
+        svg.Append(Invariant($"<text x=\"{ax + rl + 14:0.#}\" y=\"{ry + 4}\">arrow length of {referenceDeg:0}° lean</text></g>\n"));
     }
 
     private static void AppendLabel(StringBuilder svg, Frame frame, Vector3 at, string text, string colour) =>

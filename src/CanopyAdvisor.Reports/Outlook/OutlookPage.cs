@@ -143,7 +143,7 @@ public static class OutlookPage
     {
         html.Append("<section id=\"map\">\n<h2>Floor map</h2>\n<figure>\n");
         html.Append(MapSvg(report));
-        html.Append("<figcaption>Seen from above, north up. Each bench is filled by its risk class (plum with cross-hatch: leaves grade; ochre with diagonal lines: watch; pale plain: low) and named under its south end; the arrow from its middle points where the tops lean at week end, its length growing with the lean (4 px per degree), labelled with the lean and its compass point; “stretch” marks a bench with stretch flags. The same facts are in the ranking table.</figcaption>\n");
+        html.Append("<figcaption>Seen from above, north up. Each bench is filled by its risk class (plum with cross-hatch: leaves grade; ochre with diagonal lines: watch; pale plain: low) and named under its south end; the arrow from its middle points where the tops lean at week end, its length growing with the lean on one scale for the whole map (the legend’s reference arrow gives it); under each bench are its risk words, its lean at week end with the compass point, and “stretch” when it has stretch flags. The same facts are in the ranking table.</figcaption>\n");
         html.Append("</figure>\n</section>\n");
     }
 
