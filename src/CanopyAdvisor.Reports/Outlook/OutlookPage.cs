@@ -13,7 +13,8 @@ namespace CanopyAdvisor.Reports.Outlook;
 /// <para>The page is polyglot markup (HTML5 that is also well-formed XML, in the XHTML namespace), so any HTML or XML
 /// parser reads it. Sections: at a glance, floor map, ranking table, lean charts, daily light, rotation, change against
 /// last week, notes. In print each section after the first starts on a new page; the layout fits the printable width
-/// of both A4 and US Letter with 12 mm margins (186 mm).</para>
+/// of both A4 and US Letter with 12 mm margins (186 mm), and the wide ranking table asks for a landscape page (CSS
+/// named pages; a browser without them prints it upright, columns wrapping).</para>
 /// <para>Colour never carries meaning alone: risk classes also have a pattern on the map and a shape and words in the
 /// table; chart lines differ in dash and carry labels; every picture has a title, a description and a text alternative.</para>
 /// </remarks>
@@ -47,7 +48,10 @@ public static class OutlookPage
         .charts figure { width: 88mm; margin: 0; }
         .note { font-size: 8.5pt; color: #3d4650; }
         tr { break-inside: avoid; page-break-inside: avoid; }
+        h2, h3, caption { break-after: avoid; page-break-after: avoid; }
         @page { margin: 12mm; }
+        @page wide { size: landscape; margin: 12mm; }
+        #ranking { page: wide; }
         @media print {
           body { max-width: none; padding: 0; }
           section { break-before: page; page-break-before: always; }
