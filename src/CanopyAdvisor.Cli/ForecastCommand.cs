@@ -21,18 +21,14 @@ internal static class ForecastCommand
 
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
-        var site = new Argument<string>("site") { Description = "Site file (JSON) with lots, or demo:NAME for a built-in demo site." };
+        var inputs = new ForecastInputs();
         var days = new Option<double>("--days") { Description = "Horizon in days (default 7; up to a year).", DefaultValueFactory = _ => 7 };
-        var now = new Option<string?>("--now") { Description = "Forecast start, ISO-8601 with offset (default: the current time)." };
-        var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV) instead of clear sky × the site's clearness." };
-        var temperatures = new Option<string?>("--temperatures") { Description = "Measured air temperature log (CSV: timestamp, airC) instead of the site's setpoints." };
-        Option<string[]> crops = CropsCommand.CropFoldersOption();
         var noBand = new Option<bool>("--no-band") { Description = "Skip the uncertainty band (faster)." };
         var json = new Option<bool>("--json") { Description = "Print JSON instead of a table." };
         var map = new Option<string?>("--map") { Description = "Also write a floor map (SVG) of each plant's lean at the horizon with a lean arrow per bench." };
         var command = new Command("forecast", "Per bench: lean now and at the horizon, direction, rate, when it leaves grade, height at sale, and flags.")
         {
-            site, days, now, weather, temperatures, crops, noBand, json, map,
+            inputs.Site, days, inputs.Now, inputs.Weather, inputs.Temperatures, inputs.Crops, noBand, json, map,
         };
         command.SetAction(parse =>
         {
@@ -42,47 +38,9 @@ internal static class ForecastCommand
                 throw new InvalidInputException("--days", "must be more than 0 and at most 366");
             }
 
-            Instant start = parse.GetValue(now) is string nowText
-                ? TimeArguments.ParseOffsetDateTime(nowText, "--now").ToInstant()
-                : clock.GetCurrentInstant();
-
-            // Read and check every input before computing: nothing is computed from half-read data.
-            Site model = SiteSource.Load(parse.GetValue(site)!);
-            if (model.Lots.IsDefaultOrEmpty)
-            {
-                throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section (see the site file README)");
-            }
-
-            CropLibrary library = CropsCommand.Load(parse.GetValue(crops));
-            var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
-            foreach (Lot lot in model.Lots)
-            {
-                if (library.TryGet(lot.CropId, out Crop? crop))
-                {
-                    cropsById[lot.CropId] = crop;
-                }
-            }
-
-            string? weatherPath = parse.GetValue(weather);
-            IOutsideLightSource outside = DaylightSource.Create(model, weatherPath);
-            string? temperaturePath = parse.GetValue(temperatures);
-            ITemperatureSource temperature;
-            if (temperaturePath is null)
-            {
-                temperature = new SetpointTemperature(model.Temperatures, model.Location, model.Zone);
-            }
-            else
-            {
-                TemperatureLog log = TemperatureLogReader.ReadFile(temperaturePath);
-                foreach (TemperatureSpike spike in log.Spikes)
-                {
-                    error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"warning: {spike.Where}: {spike.AirC} °C is a spike (neighbours {spike.PreviousAirC} and {spike.NextAirC} °C); left out, not replaced"));
-                }
-
-                temperature = new MeasuredTemperature(log.Records, model.Location, model.Zone);
-            }
-
-            var request = new ForecastRequest(model, cropsById, outside, temperature, start)
+            ForecastInputs.Loaded loaded = inputs.Load(parse, clock, error);
+            Site model = loaded.Site;
+            var request = new ForecastRequest(model, loaded.Crops, loaded.Outside, loaded.Temperature, loaded.Now)
             {
                 Horizon = Duration.FromHours(dayCount * 24),
                 IncludeUncertainty = !parse.GetValue(noBand),
@@ -90,7 +48,7 @@ internal static class ForecastCommand
             var progress = new ProgressReporter(error, "forecasting", interactive);
             SiteForecast forecast = BenchForecaster.Run(request, progress);
 
-            ForecastReport report = Build(model, forecast, weatherPath, temperaturePath);
+            ForecastReport report = Build(model, forecast, loaded.WeatherPath, loaded.TemperaturePath);
             if (parse.GetValue(map) is string mapPath)
             {
                 File.WriteAllText(mapPath, LeanMapSvg.Render(model, forecast, $"{model.Name}: lean forecast to {report.HorizonEnd}"));
@@ -140,9 +98,7 @@ internal static class ForecastCommand
             Format(forecast.HorizonEnd),
             forecast.Step.TotalMinutes,
             DaylightSource.Describe(site, weatherPath),
-            temperaturePath is null
-                ? string.Create(CultureInfo.InvariantCulture, $"setpoints {site.Temperatures.DayC}/{site.Temperatures.NightC} °C day/night, pre-dawn drop {site.Temperatures.PreDawnDropC} °C for {site.Temperatures.PreDawnDropHours} h")
-                : $"measured log {Path.GetFileName(temperaturePath)}",
+            ForecastInputs.DescribeTemperatures(site, temperaturePath),
             forecast.MissingLightSteps,
             forecast.MissingTemperatureSteps,
             benches);

@@ -2,7 +2,8 @@ using CanopyAdvisor.Core.Sites;
 
 namespace CanopyAdvisor.Reports;
 
-/// <summary>What a floor map shows: one value per sample cell and one arrow per bench, with the words of its legend.</summary>
+/// <summary>What a floor map shows: one value per sample cell (or a category per bench) and one arrow per bench, with
+/// the words of its legend.</summary>
 /// <param name="Site">The site drawn (structure, benches, lamps, obstructions).</param>
 /// <param name="Title">Title printed at the top.</param>
 /// <param name="Benches">Per site bench (same order), its cells and arrow, or null for a bench with nothing to show.</param>
@@ -19,4 +20,15 @@ public sealed record FloorMap(
     string ValueLegend,
     string ArrowLegend,
     double? Low = null,
-    double? High = null);
+    double? High = null)
+{
+    /// <summary>The categories benches may be filled with, in legend order; when not empty the legend shows them
+    /// (swatch, pattern and label) instead of the colour ramp.</summary>
+    public IReadOnlyList<FloorMapCategory> Categories { get; init; } = [];
+
+    /// <summary>Colour of the arrows, <c>#rrggbb</c>; drawn over a white outline so they read on any fill.</summary>
+    public string ArrowColour { get; init; } = "#b3202a";
+
+    /// <summary>A longer text alternative for the picture (SVG <c>desc</c>), or null.</summary>
+    public string? Description { get; init; }
+}

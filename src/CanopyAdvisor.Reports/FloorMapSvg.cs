@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Security;
 using System.Text;
 using CanopyAdvisor.Core.Geometry;
 using CanopyAdvisor.Core.Sites;
@@ -79,9 +77,24 @@ public static class FloorMapSvg
         var svg = new StringBuilder();
         double heightPx = mapHeightPx + (2 * MarginPx) + 20 + LegendPx;
         svg.Append(Invariant($"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{WidthPx}\" height=\"{heightPx:0}\" viewBox=\"0 0 {WidthPx} {heightPx:0}\" font-family=\"sans-serif\" font-size=\"12\">\n"));
-        svg.Append(Invariant($"<title>{Escape(title)}</title>\n<rect width=\"100%\" height=\"100%\" fill=\"#fbfaf6\"/>\n"));
+        svg.Append(Invariant($"<title>{Escape(title)}</title>\n"));
+        if (map.Description is string description)
+        {
+            svg.Append(Invariant($"<desc>{Escape(description)}</desc>\n"));
+        }
+
+        // Every category a bench uses gets its pattern, listed or not; the legend shows the listed ones, else those used.
+        List<FloorMapCategory> used = [.. map.Categories.Concat(benches.Where(b => b?.Category is not null).Select(b => b!.Category!)).DistinctBy(c => c.Key)];
+        if (map.Categories.Count == 0 && used.Count > 0)
+        {
+            map = map with { Categories = used };
+        }
+
+        AppendPatterns(svg, used);
+        svg.Append("<rect width=\"100%\" height=\"100%\" fill=\"#fbfaf6\"/>\n");
         svg.Append(Invariant($"<text x=\"{MarginPx}\" y=\"24\" font-size=\"16\" font-weight=\"bold\">{Escape(title)}</text>\n"));
 
+        double pxPerDegree = ArrowScale(site, levels, benches, first.PxPerM);
         Frame frame = first;
         for (int l = 0; l < levels.Count; l++)
         {
@@ -102,7 +115,7 @@ public static class FloorMapSvg
 
             foreach (int b in level.Benches)
             {
-                AppendBench(svg, frame, site.Benches[b], benches[b]?.Cells, low, high, map.CellLabel);
+                AppendBench(svg, frame, site.Benches[b], benches[b], low, high, map.CellLabel);
             }
 
             foreach (Lamp lamp in site.Lamps.Where(lamp => level.HoldsLampAt(lamp.Position.Z)))
@@ -114,14 +127,14 @@ public static class FloorMapSvg
             {
                 if (benches[b] is FloorMapBench layer)
                 {
-                    AppendArrow(svg, frame, site.Benches[b], layer);
+                    AppendArrow(svg, frame, site.Benches[b], layer, map.ArrowColour, pxPerDegree);
                 }
             }
         }
 
         frame = first with { Top = MarginPx + 20, HeightPx = mapHeightPx };
         AppendNorthAndScale(svg, frame);
-        AppendLegend(svg, frame, low, high, map);
+        AppendLegend(svg, frame, low, high, map, pxPerDegree);
         svg.Append("</svg>\n");
         return svg.ToString();
     }
@@ -152,20 +165,16 @@ public static class FloorMapSvg
         }
     }
 
-    private static void AppendBench(StringBuilder svg, Frame frame, Bench bench, double[]? cells, double low, double high, string cellLabel)
+    private static void AppendBench(StringBuilder svg, Frame frame, Bench bench, FloorMapBench? layer, double low, double high, string cellLabel)
     {
         Footprint f = bench.Footprint;
+        double[]? cells = layer?.Category is null ? layer?.Cells : null;
         double along = f.LengthM / bench.SamplesAlongLength, across = f.WidthM / bench.SamplesAcrossWidth;
-        for (int i = 0; i < bench.SamplesAlongLength; i++)
+        for (int i = 0; i < bench.SamplesAlongLength && cells is not null; i++)
         {
             for (int j = 0; j < bench.SamplesAcrossWidth; j++)
             {
                 // Cell order follows SampleGrid: along-index outer, across-index inner.
-                if (cells is null)
-                {
-                    continue;
-                }
-
                 double value = cells[(i * bench.SamplesAcrossWidth) + j];
                 Vector3 corner = f.Corner + (f.AxisDirection * (i * along)) + (f.WidthDirection * (j * across));
                 Vector3[] quad =
@@ -180,10 +189,74 @@ public static class FloorMapSvg
             }
         }
 
+        if (layer?.Category is FloorMapCategory category)
+        {
+            svg.Append(Polygon(frame, Corners(f), category.Fill, "none", 0, layer.Tooltip ?? $"{bench.Id}: {category.Label}")).Append('\n');
+            if (category.Pattern != FloorMapPattern.None)
+            {
+                svg.Append(Polygon(frame, Corners(f), $"url(#{PatternId(category)})", "none", 0)).Append('\n');
+            }
+        }
+
         svg.Append(Polygon(frame, Corners(f), "none", "#1f2a33", 1.5)).Append('\n');
         Vector3 labelAt = f.Corner + (f.AxisDirection * (f.LengthM + 0.6)) + (f.WidthDirection * (f.WidthM / 2));
         AppendLabel(svg, frame, labelAt, bench.Id, "#1f2a33");
+        if (layer?.Category is not null || layer?.Badge is not null)
+        {
+            // Category and badge words go beyond the bench's start end, so the arrow and its label keep the middle.
+            Vector3 under = f.Corner - (f.AxisDirection * 0.3) + (f.WidthDirection * (f.WidthM / 2));
+            double x = frame.X(under), y = frame.Y(under) + 12;
+            if (layer.Category is FloorMapCategory c)
+            {
+                svg.Append(Invariant($"<text x=\"{x:0.#}\" y=\"{y:0.#}\" text-anchor=\"middle\" font-size=\"11\" font-weight=\"bold\" fill=\"#1f2a33\">{Escape(c.Label)}</text>\n"));
+                y += 13;
+                if (double.IsFinite(layer.ArrowTilt.Degrees))
+                {
+                    svg.Append(Invariant($"<text x=\"{x:0.#}\" y=\"{y:0.#}\" text-anchor=\"middle\" font-size=\"11\" fill=\"#1f2a33\">{Escape(ArrowLabel(layer))}</text>\n"));
+                    y += 13;
+                }
+            }
+
+            if (layer.Badge is string badge)
+            {
+                svg.Append(Invariant($"<text x=\"{x:0.#}\" y=\"{y:0.#}\" text-anchor=\"middle\" font-size=\"11\" font-style=\"italic\" fill=\"#1f2a33\">{Escape(badge)}</text>\n"));
+            }
+        }
     }
+
+    private static void AppendPatterns(StringBuilder svg, List<FloorMapCategory> categories)
+    {
+        if (categories.Count == 0)
+        {
+            return;
+        }
+
+        svg.Append("<defs>");
+        foreach (FloorMapCategory c in categories)
+        {
+            string id = PatternId(c);
+            string ink = Escape(c.Ink);
+            switch (c.Pattern)
+            {
+                case FloorMapPattern.Diagonal:
+                    svg.Append(Invariant($"<pattern id=\"{id}\" width=\"8\" height=\"8\" patternUnits=\"userSpaceOnUse\"><path d=\"M-2,2 l4,-4 M0,8 l8,-8 M6,10 l4,-4\" stroke=\"{ink}\" stroke-width=\"1.2\"/></pattern>"));
+                    break;
+                case FloorMapPattern.CrossHatch:
+                    svg.Append(Invariant($"<pattern id=\"{id}\" width=\"8\" height=\"8\" patternUnits=\"userSpaceOnUse\"><path d=\"M0,8 l8,-8 M0,0 l8,8\" stroke=\"{ink}\" stroke-width=\"1.2\"/></pattern>"));
+                    break;
+                case FloorMapPattern.Dots:
+                    svg.Append(Invariant($"<pattern id=\"{id}\" width=\"8\" height=\"8\" patternUnits=\"userSpaceOnUse\"><circle cx=\"4\" cy=\"4\" r=\"1.3\" fill=\"{ink}\"/></pattern>"));
+                    break;
+                default:
+                    break;
+            }
+        }
+
+        svg.Append("</defs>\n");
+    }
+
+    private static string PatternId(FloorMapCategory c) =>
+        "pattern-" + new string([.. c.Key.Select(ch => char.IsAsciiLetterOrDigit(ch) ? ch : '-')]);
 
     private static void AppendLamp(StringBuilder svg, Frame frame, Lamp lamp)
     {
@@ -202,7 +275,7 @@ public static class FloorMapSvg
         }
     }
 
-    private static void AppendArrow(StringBuilder svg, Frame frame, Bench bench, FloorMapBench layer)
+    private static void AppendArrow(StringBuilder svg, Frame frame, Bench bench, FloorMapBench layer, string colour, double pxPerDegree)
     {
         Vector3 centre = Centre(bench.Footprint);
         double tilt = layer.ArrowTilt.Degrees;
@@ -211,16 +284,58 @@ public static class FloorMapSvg
             return;
         }
 
-        // 4 px per degree of tilt, at least a stub, at most 120 px: long enough to read, short enough to stay near its bench.
-        double lengthPx = Math.Clamp(4 * tilt, 6, 120);
-        double a = layer.ArrowAzimuth.Radians;
+        // One scale for the whole map (so lengths compare), at least a stub, at most 120 px.
+        double lengthPx = Math.Clamp(pxPerDegree * tilt, 6, 120);
         double x0 = frame.X(centre), y0 = frame.Y(centre);
-        double x1 = x0 + (lengthPx * Math.Sin(a)), y1 = y0 - (lengthPx * Math.Cos(a));
-        svg.Append(Invariant($"<line x1=\"{x0:0.#}\" y1=\"{y0:0.#}\" x2=\"{x1:0.#}\" y2=\"{y1:0.#}\" stroke=\"#b3202a\" stroke-width=\"3\" stroke-linecap=\"round\"/>\n"));
-        double hx = Math.Sin(a), hy = -Math.Cos(a);
-        svg.Append(Invariant($"<polygon points=\"{x1 + (8 * hx):0.#},{y1 + (8 * hy):0.#} {x1 - (5 * hy):0.#},{y1 + (5 * hx):0.#} {x1 + (5 * hy):0.#},{y1 - (5 * hx):0.#}\" fill=\"#b3202a\"/>\n"));
-        string label = tilt < 0.05 ? "vertical" : Invariant($"{tilt:0.0}° {Direction.CompassPoint(layer.ArrowAzimuth)}");
-        svg.Append(Invariant($"<text x=\"{x0 + 6:0.#}\" y=\"{y0 + 16:0.#}\" fill=\"#b3202a\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(label)}</text>\n"));
+
+        // Drawn pointing north (up, −y) and turned by the compass bearing: SVG's rotate(a) turns clockwise on screen
+        // (y down), as a bearing does with north up.
+        double bearing = layer.ArrowAzimuth.Normalized().Degrees;
+        string c = Escape(colour);
+        svg.Append(Invariant($"<g class=\"arrow\" data-bench=\"{Escape(bench.Id)}\" transform=\"translate({x0:0.##} {y0:0.##}) rotate({bearing:0.##})\">"));
+        svg.Append(Invariant($"<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"{-lengthPx:0.#}\" stroke=\"#ffffff\" stroke-width=\"6\" stroke-linecap=\"round\"/>"));
+        svg.Append(Invariant($"<polygon points=\"0,{-lengthPx - 10:0.#} -7,{-lengthPx + 1:0.#} 7,{-lengthPx + 1:0.#}\" fill=\"#ffffff\"/>"));
+        svg.Append(Invariant($"<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"{-lengthPx:0.#}\" stroke=\"{c}\" stroke-width=\"3\" stroke-linecap=\"round\"/>"));
+        svg.Append(Invariant($"<polygon points=\"0,{-lengthPx - 8:0.#} -5,{-lengthPx:0.#} 5,{-lengthPx:0.#}\" fill=\"{c}\"/></g>\n"));
+        if (layer.Category is not null)
+        {
+            // A categorised bench prints its arrow label with its other words under the bench (see AppendBench).
+            return;
+        }
+
+        // The label sits behind the arrow's tail (opposite to where it points), so the two never cross.
+        double ex = Math.Sin(layer.ArrowAzimuth.Radians), sy = -Math.Cos(layer.ArrowAzimuth.Radians);
+        string anchor = ex > 0.3 ? "end" : ex < -0.3 ? "start" : "middle";
+        double lx = x0 - (8 * ex), ly = y0 - (12 * sy) + 4;
+        svg.Append(Invariant($"<text x=\"{lx:0.#}\" y=\"{ly:0.#}\" text-anchor=\"{anchor}\" fill=\"{c}\" font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">{Escape(ArrowLabel(layer))}</text>\n"));
+    }
+
+    private static string ArrowLabel(FloorMapBench layer) =>
+        layer.ArrowTilt.Degrees < 0.05 ? "vertical" : Invariant($"{layer.ArrowTilt.Degrees:0.0}° {Direction.CompassPoint(layer.ArrowAzimuth)}");
+
+    /// <summary>Pixels per degree of arrow tilt: 4, or less when the longest arrow would reach past 60 % of the way to
+    /// the nearest other bench of its level, so arrows of neighbouring benches do not run into each other.</summary>
+    private static double ArrowScale(Site site, List<Level> levels, IReadOnlyList<FloorMapBench?> benches, double pxPerM)
+    {
+        double scale = 4;
+        foreach (Level level in levels)
+        {
+            foreach (int b in level.Benches)
+            {
+                if (benches[b] is not FloorMapBench layer || !(layer.ArrowTilt.Degrees > 0))
+                {
+                    continue;
+                }
+
+                Vector3 centre = Centre(site.Benches[b].Footprint);
+                double nearestPx = level.Benches.Where(o => o != b)
+                    .Select(o => (Centre(site.Benches[o].Footprint) - centre).Length * pxPerM)
+                    .DefaultIfEmpty(double.PositiveInfinity).Min();
+                scale = Math.Min(scale, 0.6 * nearestPx / layer.ArrowTilt.Degrees);
+            }
+        }
+
+        return Math.Max(scale, 0.5);
     }
 
     private static void AppendNorthAndScale(StringBuilder svg, Frame frame)
@@ -234,21 +349,50 @@ public static class FloorMapSvg
         svg.Append(Invariant($"<text x=\"{MarginPx}\" y=\"{sy + 16}\">{metres:0.##} m</text>\n"));
     }
 
-    private static void AppendLegend(StringBuilder svg, Frame frame, double low, double high, FloorMap map)
+    private static void AppendLegend(StringBuilder svg, Frame frame, double low, double high, FloorMap map, double pxPerDegree)
     {
         double x = MarginPx + 140, y = frame.Top + frame.HeightPx + 20, w = 280, h = 12;
-        svg.Append("<defs><linearGradient id=\"ramp\">");
-        for (int i = 0; i <= 10; i++)
+        if (map.Categories.Count > 0)
         {
-            svg.Append(Invariant($"<stop offset=\"{i * 10}%\" stop-color=\"{ColourRamp.At(i / 10.0)}\"/>"));
+            double cx = x;
+            foreach (FloorMapCategory c in map.Categories)
+            {
+                svg.Append(Invariant($"<rect x=\"{cx:0.#}\" y=\"{y}\" width=\"22\" height=\"14\" fill=\"{Escape(c.Fill)}\" stroke=\"#1f2a33\" stroke-width=\"0.8\"/>"));
+                if (c.Pattern != FloorMapPattern.None)
+                {
+                    svg.Append(Invariant($"<rect x=\"{cx:0.#}\" y=\"{y}\" width=\"22\" height=\"14\" fill=\"url(#{PatternId(c)})\"/>"));
+                }
+
+                svg.Append(Invariant($"<text x=\"{cx + 28:0.#}\" y=\"{y + 11}\">{Escape(c.Label)}</text>\n"));
+                cx += 36 + (6.5 * c.Label.Length);
+            }
+
+            svg.Append(Invariant($"<text x=\"{x}\" y=\"{y + h + 22}\">{Escape(map.ValueLegend)}</text>\n"));
+        }
+        else
+        {
+            svg.Append("<defs><linearGradient id=\"ramp\">");
+            for (int i = 0; i <= 10; i++)
+            {
+                svg.Append(Invariant($"<stop offset=\"{i * 10}%\" stop-color=\"{ColourRamp.At(i / 10.0)}\"/>"));
+            }
+
+            svg.Append("</linearGradient></defs>\n");
+            svg.Append(Invariant($"<rect x=\"{x}\" y=\"{y}\" width=\"{w}\" height=\"{h}\" fill=\"url(#ramp)\" stroke=\"#1f2a33\" stroke-width=\"0.5\"/>\n"));
+            svg.Append(Invariant($"<text x=\"{x}\" y=\"{y + h + 14}\">{low:0.0}</text><text x=\"{x + w}\" y=\"{y + h + 14}\" text-anchor=\"end\">{high:0.0}</text>"));
+            svg.Append(Invariant($"<text x=\"{x + (w / 2)}\" y=\"{y + h + 30}\" text-anchor=\"middle\">{Escape(map.ValueLegend)}</text>\n"));
         }
 
-        svg.Append("</linearGradient></defs>\n");
-        svg.Append(Invariant($"<rect x=\"{x}\" y=\"{y}\" width=\"{w}\" height=\"{h}\" fill=\"url(#ramp)\" stroke=\"#1f2a33\" stroke-width=\"0.5\"/>\n"));
-        svg.Append(Invariant($"<text x=\"{x}\" y=\"{y + h + 14}\">{low:0.0}</text><text x=\"{x + w}\" y=\"{y + h + 14}\" text-anchor=\"end\">{high:0.0}</text>"));
-        svg.Append(Invariant($"<text x=\"{x + (w / 2)}\" y=\"{y + h + 30}\" text-anchor=\"middle\">{Escape(map.ValueLegend)}</text>\n"));
-        svg.Append(Invariant($"<text x=\"{x + w + 24}\" y=\"{y + 10}\" fill=\"#b3202a\" font-weight=\"bold\">→ {Escape(map.ArrowLegend)}</text>\n"));
-        svg.Append(Invariant($"<text x=\"{x + w + 24}\" y=\"{y + 28}\" fill=\"#6b6b6b\">● overhead lamp</text><text x=\"{x + w + 150}\" y=\"{y + 28}\" fill=\"#d9822b\">▲ side lamp</text>\n"));
+        double ax = map.Categories.Count > 0 ? x : x + w + 24, ay = map.Categories.Count > 0 ? y + h + 42 : y + 10;
+        svg.Append(Invariant($"<text x=\"{ax}\" y=\"{ay}\" fill=\"{Escape(map.ArrowColour)}\" font-weight=\"bold\">→ {Escape(map.ArrowLegend)}</text>\n"));
+        svg.Append(Invariant($"<text x=\"{ax}\" y=\"{ay + 18}\" fill=\"#6b6b6b\">● overhead lamp</text><text x=\"{ax + 126}\" y=\"{ay + 18}\" fill=\"#d9822b\">▲ side lamp</text>\n"));
+
+        // A reference arrow gives the length scale: 10° (or 5° when 10° would be longer than the 120 px cap).
+        double referenceDeg = pxPerDegree * 10 <= 120 ? 10 : 5;
+        double rl = Math.Min(pxPerDegree * referenceDeg, 120), ry = ay + 34;
+        string colour = Escape(map.ArrowColour);
+        svg.Append(Invariant($"<g class=\"arrow-scale\"><line x1=\"{ax}\" y1=\"{ry}\" x2=\"{ax + rl:0.#}\" y2=\"{ry}\" stroke=\"{colour}\" stroke-width=\"3\"/><polygon points=\"{ax + rl + 8:0.#},{ry} {ax + rl:0.#},{ry - 5} {ax + rl:0.#},{ry + 5}\" fill=\"{colour}\"/>"));
+        svg.Append(Invariant($"<text x=\"{ax + rl + 14:0.#}\" y=\"{ry + 4}\">arrow length of {referenceDeg:0}° lean</text></g>\n"));
     }
 
     private static void AppendLabel(StringBuilder svg, Frame frame, Vector3 at, string text, string colour) =>
@@ -291,9 +435,9 @@ public static class FloorMapSvg
         return steps.Select(s => s * power).Last(s => s <= metres || s == power);
     }
 
-    private static string Escape(string text) => SecurityElement.Escape(text) ?? string.Empty;
+    private static string Escape(string text) => Markup.Escape(text);
 
-    private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+    private static string Invariant(FormattableString text) => Markup.Invariant(text);
 
     /// <summary>One drawing level: the benches at one height and the lamps between it and the next level up.</summary>
     private sealed record Level(string Title, int[] Benches, double FromHeightM, double ToHeightM)

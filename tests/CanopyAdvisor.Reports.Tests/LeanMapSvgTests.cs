@@ -37,6 +37,8 @@ public class LeanMapSvgTests
         int cells = doc.Descendants(svg + "polygon").Count(p => p.Element(svg + "title")?.Value.Contains("% of the grade limit", StringComparison.Ordinal) == true);
         Assert.Equal(forecast.Benches.Sum(b => b.PointLeansAtHorizon.Length), cells);
         Assert.Equal(site.Benches.Sum(b => b.SamplesAlongLength * b.SamplesAcrossWidth), cells); // every demo bench carries a lot
-        Assert.Equal(forecast.Benches.Length, doc.Descendants(svg + "line").Count(l => (string?)l.Attribute("stroke") == "#b3202a"));
+        var arrows = doc.Descendants(svg + "g").Where(g => (string?)g.Attribute("class") == "arrow").ToList();
+        Assert.Equal(forecast.Benches.Length, arrows.Count);
+        Assert.All(arrows, a => Assert.Single(a.Elements(svg + "line"), l => (string?)l.Attribute("stroke") == "#b3202a"));
     }
 }

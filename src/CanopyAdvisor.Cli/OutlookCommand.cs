@@ -1,0 +1,136 @@
+using System.CommandLine;
+using System.Text;
+using CanopyAdvisor.Core.Forecast;
+using CanopyAdvisor.Core.Light;
+using CanopyAdvisor.Core.Sites;
+using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Reports.Outlook;
+using NodaTime;
+
+namespace CanopyAdvisor.Cli;
+
+/// <summary><c>canopy outlook</c>: the weekly lean outlook of a site as a printable page, a CSV and <c>outlook.json</c>.</summary>
+internal static class OutlookCommand
+{
+    /// <summary>The page's file name in the output folder.</summary>
+    public const string PageFile = "outlook.html";
+
+    /// <summary>The CSV's file name in the output folder.</summary>
+    public const string CsvFile = "outlook.csv";
+
+    /// <summary>The gist's file name in the output folder (read back next week for the change).</summary>
+    public const string SnapshotFile = "outlook.json";
+
+    public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
+    {
+        var inputs = new ForecastInputs();
+        var outFolder = new Option<string?>("--out") { Description = "Folder to write outlook.html, outlook.csv and outlook.json into (created if needed)." };
+        var previous = new Option<string?>("--previous") { Description = "An earlier outlook.json to compare with (default: the one already in the --out folder, if any)." };
+        var command = new Command("outlook", "The week's lean outlook of a site: floor map, benches ranked by risk, lean and DLI charts, change against last week; as a printable page, CSV and JSON.")
+        {
+            inputs.Site, outFolder, inputs.Now, inputs.Weather, inputs.Temperatures, inputs.Crops, previous,
+        };
+        command.SetAction(parse =>
+        {
+            string folder = parse.GetValue(outFolder) is string o && o.Length > 0
+                ? o
+                : throw new InvalidInputException("--out", "is required: the folder to write outlook.html, outlook.csv and outlook.json into");
+            if (File.Exists(folder))
+            {
+                throw new InvalidInputException("--out", $"'{folder}' is a file, not a folder");
+            }
+
+            string? previousPath = parse.GetValue(previous);
+            if (previousPath is not null && !File.Exists(previousPath))
+            {
+                throw new InvalidInputException("--previous", $"file not found: {previousPath}");
+            }
+
+            ForecastInputs.Loaded loaded = inputs.Load(parse, clock, error);
+            Site site = loaded.Site;
+
+            // Read last week's gist before anything is written over it.
+            string earlierPath = previousPath ?? Path.Combine(folder, SnapshotFile);
+            string? earlierText = File.Exists(earlierPath) ? File.ReadAllText(earlierPath) : null;
+            PreviousOutlook earlier = PreviousOutlook.Resolve(earlierText, earlierPath, site.Id, loaded.Now);
+            if (earlier.Note is string note && earlierText is not null)
+            {
+                error.WriteLine((earlier.IsWarning ? "warning: " : "note: ") + note);
+            }
+
+            var request = new ForecastRequest(site, loaded.Crops, loaded.Outside, loaded.Temperature, loaded.Now);
+            ForecastSession session = ForecastSession.Prepare(request);
+            SiteForecast forecast = session.Run(new ProgressReporter(error, "forecasting", interactive));
+            LocalDate first = forecast.Now.InZone(site.Zone).Date;
+            LocalDate last = (forecast.HorizonEnd - Duration.Epsilon).InZone(site.Zone).Date;
+            LightPeriodSummary light = LightSimulation.Run(
+                session.Field, loaded.Outside, first, last, progress: new ProgressReporter(error, "daily light", interactive));
+
+            var notes = new List<string>
+            {
+                $"Daylight: {DaylightSource.Describe(site, loaded.WeatherPath)}; air: {ForecastInputs.DescribeTemperatures(site, loaded.TemperaturePath)}.",
+            };
+            if (earlier.Note is string remark)
+            {
+                notes.Add(char.ToUpperInvariant(remark[0]) + remark[1..] + ".");
+            }
+
+            OutlookReport report = OutlookReport.Build(new OutlookInput(site, forecast, loaded.Crops, BenchDayDli.From(light))
+            {
+                Previous = earlier.Snapshot,
+                Notes = notes,
+            });
+
+            Directory.CreateDirectory(folder);
+            string[] written = WriteAll(folder, new Dictionary<string, string>(StringComparer.Ordinal)
+            {
+                [PageFile] = OutlookPage.Render(report),
+                [CsvFile] = OutlookCsv.Write(report),
+                [SnapshotFile] = OutlookSnapshotJson.Write(OutlookSnapshot.From(report)),
+            });
+            foreach (string path in written)
+            {
+                output.WriteLine(path);
+            }
+
+            return 0;
+        });
+        return command;
+    }
+
+    /// <summary>Writes each file to a temporary name in the folder, then moves them into place, so no reader ever
+    /// sees a half-written file (a rename within one folder replaces the old file whole). Temporary files are removed
+    /// if a write fails.</summary>
+    internal static string[] WriteAll(string folder, IReadOnlyDictionary<string, string> files)
+    {
+        var temporary = new List<(string Temp, string Final)>();
+        var utf8 = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false);
+        try
+        {
+            foreach (var (name, text) in files)
+            {
+                string final = Path.Combine(folder, name);
+                string temp = Path.Combine(folder, $".{name}.{Guid.NewGuid():N}.tmp");
+                temporary.Add((temp, final));
+                File.WriteAllText(temp, text, utf8);
+            }
+
+            foreach (var (temp, final) in temporary)
+            {
+                File.Move(temp, final, overwrite: true);
+            }
+        }
+        finally
+        {
+            foreach (var (temp, _) in temporary)
+            {
+                if (File.Exists(temp))
+                {
+                    File.Delete(temp);
+                }
+            }
+        }
+
+        return [.. temporary.Select(t => t.Final)];
+    }
+}
