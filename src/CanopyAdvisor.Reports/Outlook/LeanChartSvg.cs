@@ -27,7 +27,7 @@ internal static class LeanChartSvg
         double top = Math.Max(limit * 1.15, 1);
         foreach (LeanSample s in track)
         {
-            top = Math.Max(top, s.Lean.Tilt.Degrees * 1.05);
+            top = Math.Max(top, s.Tilt.Degrees * 1.05);
         }
 
         if (f.Uncertainty is LeanUncertainty band)
@@ -85,7 +85,7 @@ internal static class LeanChartSvg
         // The lean track.
         if (track.Length > 0)
         {
-            string points = string.Join(' ', track.Select(s => Invariant($"{X(s.At):0.#},{Y(s.Lean.Tilt.Degrees):0.#}")));
+            string points = string.Join(' ', track.Select(s => Invariant($"{X(s.At):0.#},{Y(s.Tilt.Degrees):0.#}")));
             svg.Append(Invariant($"<polyline class=\"lean-track\" points=\"{points}\" fill=\"none\" stroke=\"{OutlookPalette.Ink}\" stroke-width=\"2\" stroke-linejoin=\"round\"/>"));
         }
 

@@ -40,7 +40,7 @@ internal static class OutlookFixture
         Lot lot = Site.Lots.Single(l => l.BenchId == benchId);
         LeanReading Reading(double tilt) => new(Angle.FromDegrees(tilt), Angle.FromDegrees(azimuthDeg), Direction.CompassPoint(Angle.FromDegrees(azimuthDeg)));
         ImmutableArray<LeanSample> track = [.. Enumerable.Range(-24, 24 * 7 + 25).Select(h =>
-            new LeanSample(Now + Duration.FromHours(h), Reading(leanNowDeg + ((leanEndDeg - leanNowDeg) * Math.Max(h, 0) / (24.0 * 7)))))];
+            new LeanSample(Now + Duration.FromHours(h), Angle.FromDegrees(leanNowDeg + ((leanEndDeg - leanNowDeg) * Math.Max(h, 0) / (24.0 * 7))), Angle.FromDegrees(azimuthDeg)))];
         return new BenchForecast(
             benchId,
             lot.Id,
