@@ -10,6 +10,8 @@ namespace CanopyAdvisor.Core.Advice.SideLamps;
 internal sealed class SideLampObjective
 {
     /// <summary>Weight of the PPFD-ceiling and uniformity-floor penalties against the lateral term (which is 1 without lamps).</summary>
+    /// <remarks>Each penalty is K·(v + v²) of the relative violation v: the linear part makes it exact (a violation of 0.1 %
+    /// already costs as much as all the lateral light), the square keeps it growing.</remarks>
     public const double PenaltyWeight = 1000.0;
 
     private readonly CompiledLightField _field;
@@ -134,7 +136,7 @@ internal sealed class SideLampObjective
             if (!double.IsNaN(_ceilingTarget[i]))
             {
                 double over = Math.Max(0, _peakOn[i] + added[(Stride * i) + 2] - _ceilingTarget[i]) / _ceiling[i];
-                ceiling += over * over;
+                ceiling += over + (over * over);
             }
         }
 
@@ -142,8 +144,8 @@ internal sealed class SideLampObjective
         double?[] after2 = Uniformities(added);
         for (int s = 0; s < _slots; s++)
         {
-            double short2 = Math.Max(0, _uniformityTarget[s] - (after2[s] ?? 1));
-            uniformity += short2 * short2;
+            double shortfall = Math.Max(0, _uniformityTarget[s] - (after2[s] ?? 1));
+            uniformity += shortfall + (shortfall * shortfall);
         }
 
         return new ObjectiveTerms(

@@ -32,7 +32,8 @@ namespace CanopyAdvisor.Core.Advice.SideLamps;
 /// dimming × E·û × (share of the period the schedule is on); its horizontal PPFD while on is E·max(0, û·ẑ).</para>
 /// <para><b>Objective</b> (dimensionless, 1 with no lamps):
 /// J = [Σ_risk |L_xy + A_xy|² + Σ_other max(0, |L_xy + A_xy|² − |L_xy|²)] / Σ_risk |L_xy|²
-/// + w·P/1 kW + K·Σ_points (max(0, peak_on + H − max(C, peak_on))/C)² + K·Σ_benches max(0, min(U_floor, U_before) − U_after)²,
+/// + w·P/1 kW + K·Σ_points q(max(0, peak_on + H − max(C, peak_on))/C) + K·Σ_benches q(max(0, min(U_floor, U_before) − U_after)),
+/// with q(v) = v + v²,
 /// where w is <see cref="SideLampBrief.EnergyWeightPerKilowatt"/>, P the added power (watts × dimming), C a bench's PPFD
 /// ceiling, H the added PPFD while on, U = min/avg of the points' period DLI (floor 0.7: common practice), and
 /// K = 1000. Benches not at risk count only where the lamps make their sideways light worse. The penalties only stop
