@@ -446,7 +446,8 @@ public static class SideLampPlanner
         }
         else
         {
-            notes.Insert(0, string.Create(c, $"The {lampCount} proposed lamp(s) bring the at-risk benches' lateral blue light (sum of squares over their sample points) to {remaining:0.###} of what it is now."));
+            string share = remaining < 0.001 ? "less than 0.1 %" : string.Create(c, $"{remaining * 100:0.#} %");
+            notes.Insert(0, $"The {lampCount} proposed lamp(s) bring the at-risk benches' lateral blue light (sum of squares over their sample points) to {share} of what it is now.");
         }
 
         var withLots = new HashSet<string>(forecasts.Select(f => f.BenchId), StringComparer.Ordinal);

@@ -37,11 +37,14 @@ internal static class SideLampScene
     public static SideLampType LambertianType { get; } =
         new("lambert-1000", LambertianDistribution.Instance, AddedPpf, ForecastTestKit.White, AddedWatts);
 
-    public static Site Site(params Lamp[] extra)
+    public static Site Site(params Lamp[] extra) => Site(ExistingLamp, extra);
+
+    /// <summary>The scene with the existing lamp somewhere else (straight above the point gives no lateral light).</summary>
+    public static Site Site(Vector3 existingLamp, params Lamp[] extra)
     {
         Bench bench = ForecastTestKit.Bench("b", 4.5, 4.5, 1, 1, 1, 1);
         var lamp = new Lamp(
-            "west", ExistingLamp, LampAim.Down, IsotropicDistribution.Instance, ExistingPpf, ForecastTestKit.White, 1, 150,
+            "west", existingLamp, LampAim.Down, IsotropicDistribution.Instance, ExistingPpf, ForecastTestKit.White, 1, 150,
             LampSchedule.AlwaysOn);
         return ForecastTestKit.Site(
             ForecastTestKit.Room, [bench], [lamp, .. extra], ForecastTestKit.Lot("b", ForecastTestKit.WinterNow, heightMm: 80, pots: 20));
