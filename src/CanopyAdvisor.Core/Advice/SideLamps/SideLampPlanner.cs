@@ -152,6 +152,12 @@ public static class SideLampPlanner
             errors.Add(new("riskFraction", Got("must be within (0, 1]", brief.RiskFraction)));
         }
 
+        if (brief.PpfdCeilingByBench is null || brief.PpfdCeilingByCrop is null)
+        {
+            errors.Add(new("ppfdCeilings", "the ceiling maps must not be null"));
+            return errors;
+        }
+
         foreach ((string bench, double ceiling) in brief.PpfdCeilingByBench.OrderBy(p => p.Key, StringComparer.Ordinal))
         {
             string path = $"ppfdCeilings.byBench.{bench}";
