@@ -21,9 +21,6 @@ public sealed record SideLampEnergy(
     double? CostPerWeek,
     string? Currency)
 {
-    /// <summary>Watt-hours per kilowatt-hour (SI: 1 kWh = 1000 W × 1 h).</summary>
-    public const double WattHoursPerKilowattHour = 1000.0;
-
     /// <summary>The weekly energy and cost of lamps drawing <paramref name="addedWatts"/> for <paramref name="onHoursPerWeek"/>.</summary>
     /// <param name="addedWatts">Power while on, W (≥ 0).</param>
     /// <param name="onHoursPerWeek">Hours on per week, h (≥ 0).</param>
@@ -31,7 +28,7 @@ public sealed record SideLampEnergy(
     public static SideLampEnergy From(double addedWatts, double onHoursPerWeek, EnergyTariff tariff)
     {
         ArgumentNullException.ThrowIfNull(tariff);
-        double kWh = addedWatts * onHoursPerWeek / WattHoursPerKilowattHour;
+        double kWh = addedWatts * onHoursPerWeek / ModelConstants.WattHoursPerKilowattHour;
         return tariff.IsKnown
             ? new SideLampEnergy(addedWatts, onHoursPerWeek, kWh, tariff.CostOf(kWh), tariff.Currency)
             : new SideLampEnergy(addedWatts, onHoursPerWeek, kWh, null, null);

@@ -150,7 +150,7 @@ internal sealed class SideLampObjective
 
         return new ObjectiveTerms(
             lateral / _normaliser,
-            _brief.EnergyWeightPerKilowatt * watts / SideLampEnergy.WattHoursPerKilowattHour,
+            _brief.EnergyWeightPerKilowatt * watts / ModelConstants.WattHoursPerKilowattHour,
             PenaltyWeight * ceiling,
             PenaltyWeight * uniformity);
     }

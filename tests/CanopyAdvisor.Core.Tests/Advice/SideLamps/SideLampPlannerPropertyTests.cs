@@ -7,7 +7,8 @@ using NodaTime;
 
 namespace CanopyAdvisor.Core.Tests.Advice.SideLamps;
 
-/// <summary>Promises that hold for any brief: bounds, the lamp count, never worse than no lamps, and one plan per seed.</summary>
+/// <summary>Promises that hold for any brief: bounds, the lamp count, limits reported as they are, never worse than no
+/// lamps, and one plan per seed.</summary>
 /// <remarks>The expected behaviour is the planner's own contract (SideLampPlanner remarks: the bounded transform keeps
 /// every tried point inside the bounds; a lamp is kept only if it lowers the objective).</remarks>
 public class SideLampPlannerPropertyTests
@@ -40,6 +41,8 @@ public class SideLampPlannerPropertyTests
             MaxTilt = Angle.FromDegrees(Between(minTilt, 180)),
             Seed = r.Next(),
             Starts = 1,
+            DefaultPpfdCeiling = r.Next(2) == 0 ? null : Between(5, 20),
+            UniformityFloor = Between(0, 1),
         };
     }
 
@@ -54,6 +57,15 @@ public class SideLampPlannerPropertyTests
                 SideLampPlan plan = SideLampPlanner.Plan(brief, SideLampScene.Request(site));
 
                 Assert.True(plan.Lamps.Length <= brief.MaxLamps);
+                foreach (SideLampBenchOutcome bench in plan.Benches)
+                {
+                    // A limit reported as met holds in the numbers; one that does not hold is never reported as met.
+                    bool ceilingHolds = bench.PpfdCeiling is not double c || bench.LightAfter.PeakPpfd <= c * (1 + 1e-9);
+                    Assert.Equal(ceilingHolds, bench.Ceiling is LimitCheck.Met or LimitCheck.NotSet);
+                    bool floorHolds = brief.UniformityFloor == 0 || (bench.LightAfter.Uniformity ?? 1) >= brief.UniformityFloor - 1e-9;
+                    Assert.Equal(floorHolds, bench.Uniformity is LimitCheck.Met or LimitCheck.NotSet);
+                }
+
                 Assert.True(plan.Objective <= plan.ObjectiveWithoutLamps, $"{plan.Objective} > {plan.ObjectiveWithoutLamps}");
                 foreach (ProposedSideLamp p in plan.Lamps)
                 {
