@@ -216,7 +216,7 @@ internal static class LampsCommand
                 b.BenchId,
                 b.Crop,
                 b.AtRisk ? "yes" : "-",
-                Pair(b.Before.LeanNowDeg, b.After.LeanNowDeg, "0.0", "°"),
+                TextTable.Number(b.Before.LeanNowDeg, 1) + "°",
                 Pair(b.Before.LeanAtHorizonDeg, b.After.LeanAtHorizonDeg, "0.0", "°"),
                 Pair(b.Before.LeanRateDegPerDay, b.After.LeanRateDegPerDay, "+0.00;-0.00;0.00", "°"),
                 Pair(b.Before.PpfdMean, b.After.PpfdMean, "0", string.Empty),
@@ -229,7 +229,7 @@ internal static class LampsCommand
         }
 
         output.Write(table.ToString());
-        output.WriteLine("before → after. lean: bench mean, degrees from vertical; PPFD: mean horizontal µmol m⁻² s⁻¹ over the period; peak: highest");
+        output.WriteLine("before → after. lean: bench mean, degrees from vertical (now: as it is); PPFD: mean horizontal µmol m⁻² s⁻¹ over the period; peak: highest");
         output.WriteLine("at any sample point and step; DLI: mol m⁻² d⁻¹; unif.: min/avg point DLI; lateral blue: horizontal blue light vector, µmol m⁻² s⁻¹.");
         output.WriteLine();
 

@@ -359,7 +359,7 @@ public static class SideLampPlanner
 
         double remaining = riskBefore > 0 ? riskAfter / riskBefore : 1;
         ImmutableArray<string> atRisk = [.. forecasts.Where((_, s) => riskOfSlot[s]).Select(f => f.BenchId)];
-        AddPlanNotes(notes, brief, site, forecasts, atRisk, newLamps.Length, remaining);
+        AddPlanNotes(notes, brief, site, forecasts, atRisk, newLamps.Length, remaining, forecast.SpinUp);
 
         SideLampEnergy energy = SideLampEnergy.From(
             watts, existing.OnSecondsPerDay * 7 / ModelConstants.SecondsPerHour, site.Tariff);
@@ -437,7 +437,7 @@ public static class SideLampPlanner
 
     private static void AddPlanNotes(
         ImmutableArray<string>.Builder notes, SideLampBrief brief, Site site, ImmutableArray<BenchForecast> forecasts,
-        ImmutableArray<string> atRisk, int lampCount, double remaining)
+        ImmutableArray<string> atRisk, int lampCount, double remaining, Duration spinUp)
     {
         var c = CultureInfo.InvariantCulture;
         if (atRisk.IsEmpty)
@@ -454,6 +454,7 @@ public static class SideLampPlanner
         {
             string share = remaining < 0.001 ? "less than 0.1 %" : string.Create(c, $"{remaining * 100:0.#} %");
             notes.Insert(0, $"The {lampCount} proposed lamp(s) bring the at-risk benches' lateral blue light (sum of squares over their sample points) to {share} of what it is now.");
+            notes.Insert(1, string.Create(c, $"The forecast with the lamps has them on through its {spinUp.TotalDays:0.#}-day spin-up too, as if installed then: read the lean at the horizon and the rate as their settled effect; on the day they go in, the lean now is the one without them."));
         }
 
         var withLots = new HashSet<string>(forecasts.Select(f => f.BenchId), StringComparer.Ordinal);
