@@ -84,9 +84,10 @@ public static class SideLampPlanner
         }
 
         var railIds = new HashSet<string>(StringComparer.Ordinal);
+        ImmutableArray<Bench> canopies = WithLotHeights(site);
         for (int i = 0; i < rails.Length; i++)
         {
-            ValidateRail(rails[i], Item("rails", i), site, railIds, errors);
+            ValidateRail(rails[i], Item("rails", i), site, canopies, railIds, errors);
         }
 
         ImmutableArray<SideLampType> types = brief.LampTypes.IsDefault ? [] : brief.LampTypes;
@@ -724,7 +725,39 @@ public static class SideLampPlanner
         return id;
     }
 
-    private static void ValidateRail(MountingRail? rail, string path, Site site, HashSet<string> ids, List<ValidationError> errors)
+    /// <summary>The site's benches with each lot's measured height as the canopy height where it is taller (the forecast
+    /// grows the canopy from the lot, <see cref="LotCanopies"/>), so a rail may not pass through the plants.</summary>
+    private static ImmutableArray<Bench> WithLotHeights(Site site)
+    {
+        ImmutableArray<Bench> benches = site.Benches.IsDefault ? [] : site.Benches;
+        if (site.Lots.IsDefaultOrEmpty)
+        {
+            return benches;
+        }
+
+        var builder = benches.ToBuilder();
+        for (int b = 0; b < builder.Count; b++)
+        {
+            Bench? bench = builder[b];
+            if (bench?.Canopy is null)
+            {
+                continue;
+            }
+
+            foreach (Lot lot in site.Lots.Where(l => l is not null && l.BenchId == bench.Id))
+            {
+                double heightM = lot.HeightMm / ModelConstants.MillimetresPerMetre;
+                if (heightM > bench.Canopy.HeightM)
+                {
+                    builder[b] = bench with { Canopy = bench.Canopy with { HeightM = heightM } };
+                }
+            }
+        }
+
+        return builder.MoveToImmutable();
+    }
+
+    private static void ValidateRail(MountingRail? rail, string path, Site site, ImmutableArray<Bench> benches, HashSet<string> ids, List<ValidationError> errors)
     {
         if (rail is null)
         {
@@ -757,7 +790,7 @@ public static class SideLampPlanner
             errors.Add(new($"{path}.yawRangeDeg", Got("must be within (0, 180]", rail.YawHalfRange.Degrees)));
         }
 
-        if (!finite || site.Structure is null || site.Benches.IsDefault)
+        if (!finite || site.Structure is null || benches.Any(b => b?.Canopy is null || b.Footprint is null))
         {
             return;
         }
@@ -771,7 +804,7 @@ public static class SideLampPlanner
             var probe = new Lamp(
                 rail.Id, rail.At(f), Lamps.LampAim.Down, Lamps.IsotropicDistribution.Instance, 1, new Lamps.BandFractions(1, 0, 0, 0), 1, 0,
                 Lamps.LampSchedule.AlwaysOn);
-            ValidationError? problem = SiteValidator.CheckLampPlace(probe, path, site.Structure, site.Benches).FirstOrDefault();
+            ValidationError? problem = SiteValidator.CheckLampPlace(probe, path, site.Structure, benches).FirstOrDefault();
             if (problem is not null)
             {
                 errors.Add(new(path, string.Create(CultureInfo.InvariantCulture, $"at {f * length:0.##} m from its start: {problem.Message}")));

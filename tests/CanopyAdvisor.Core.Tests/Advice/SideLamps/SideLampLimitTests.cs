@@ -145,4 +145,20 @@ public class SideLampLimitTests
         Assert.Contains(ex.Errors, e => e.Path == "rails[0]" && e.Message.Contains("outside the structure", StringComparison.Ordinal));
         Assert.Contains(ex.Errors, e => e.Path == "rails[1]" && e.Message.Contains("inside the canopy", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void A_rail_through_the_lots_plants_is_rejected_even_above_the_site_files_canopy()
+    {
+        // The site file's canopy on the test bench is 0.1 m (top at 0.9 m); the lot measures 300 mm (top at 1.1 m), and the
+        // forecast grows the canopy from the lot. A rail at 1.0 m across the bench runs through the plants.
+        Site site = Forecast.ForecastTestKit.Site(
+            Forecast.ForecastTestKit.Room, [Forecast.ForecastTestKit.Bench("b", 4.5, 4.5, 1, 1, 1, 1)], [],
+            Forecast.ForecastTestKit.Lot("b", Forecast.ForecastTestKit.WinterNow, heightMm: 300, pots: 20));
+        SideLampBrief brief = SideLampScene.Brief() with { Rails = [new MountingRail("low", new Vector3(4, 5, 1.0), new Vector3(6, 5, 1.0))] };
+
+        ValidationError error = Assert.Single(SideLampPlanner.Validate(brief, site));
+        Assert.Equal("rails[0]", error.Path);
+        Assert.Contains("inside the canopy of bench 'b'", error.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain(SideLampPlanner.Validate(brief, site with { Lots = [] }), e => e.Path == "rails[0]");
+    }
 }
