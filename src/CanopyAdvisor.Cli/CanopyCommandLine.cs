@@ -20,6 +20,7 @@ internal static class CanopyCommandLine
             LightCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             ForecastCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             OutlookCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
+            LampsCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             DemoCommand.Create(output),
             CropsCommand.Create(output),
         };

@@ -46,6 +46,9 @@ public static class ModelConstants
     /// <summary>Micromoles per mole.</summary>
     public const double MicromolesPerMole = 1e6;
 
+    /// <summary>Watt-hours per kilowatt-hour, 1000 (SI: 1 kWh = 1000 W for 1 h = 3.6 MJ).</summary>
+    public const double WattHoursPerKilowattHour = 1000.0;
+
     /// <summary>G-function of a spherical leaf-angle distribution, 0.5 (Ross 1981; Monsi &amp; Saeki 1953 extinction).</summary>
     public const double SphericalLeafProjection = 0.5;
 

@@ -149,6 +149,12 @@ public sealed class CompiledLightField
     /// <summary>The lamp groups, in order of their first lamp in the site.</summary>
     public ImmutableArray<LampGroup> Groups { get; }
 
+    /// <summary>The enclosure the field was compiled against (for lamps tried against the same points).</summary>
+    internal IEnclosure Enclosure => _enclosure;
+
+    /// <summary>The bench tops of the field's site (for lamps tried against the same points).</summary>
+    internal BenchTops BenchTops => _benchTops;
+
     /// <summary>The index of a bench's first point in <see cref="Points"/> and its number of points.</summary>
     public (int Start, int Count) PointsOfBench(int benchIndex)
     {

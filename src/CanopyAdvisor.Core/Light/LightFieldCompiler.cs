@@ -132,47 +132,8 @@ public static class LightFieldCompiler
         for (int l = 0; l < lamps.Length; l++)
         {
             ref readonly LampData lamp = ref lamps[l];
-            if (lamp.Flux <= 0)
-            {
-                continue;
-            }
-
-            // û: unit vector from the point toward the lamp.
-            double dx = lamp.X - point.X, dy = lamp.Y - point.Y, dz = lamp.Z - point.Z;
-            double d2 = (dx * dx) + (dy * dy) + (dz * dz);
-            if (d2 < 1e-12)
-            {
-                continue;
-            }
-
-            double d = Math.Sqrt(d2);
-            double inverse = 1 / d;
-            double ux = dx * inverse, uy = dy * inverse, uz = dz * inverse;
-
-            // Direction leaving the lamp toward the point is −û; in the lamp frame: polar from the axis, around from C = 0°.
-            double cosPolar = -((ux * lamp.AxisX) + (uy * lamp.AxisY) + (uz * lamp.AxisZ));
-            cosPolar = Math.Clamp(cosPolar, -1.0, 1.0);
-            double around = 0;
-            if (!lamp.Symmetric)
-            {
-                around = Math.Atan2(
-                    -((ux * lamp.ThirdX) + (uy * lamp.ThirdY) + (uz * lamp.ThirdZ)),
-                    -((ux * lamp.RefX) + (uy * lamp.RefY) + (uz * lamp.RefZ)));
-                if (around < 0)
-                {
-                    around += 2 * Math.PI;
-                }
-            }
-
-            double intensity = lamp.Distribution.IntensityPerUnitFluxAtCosine(cosPolar, around);
-            if (!(intensity > 0))
-            {
-                continue;
-            }
-
-            double e = lamp.Flux * intensity / d2;
-            e *= canopy.Transmission(ux, uy, uz, d);
-            if (!(e > 0) || benchTops.BlocksSegment(point, lamp.Position) || enclosure.IsBlocked(point, lamp.Position))
+            double e = Irradiance(in lamp, point, in canopy, enclosure, benchTops, out double ux, out double uy, out double uz);
+            if (!(e > 0))
             {
                 continue;
             }
@@ -188,6 +149,97 @@ public static class LightFieldCompiler
 
             into[k + 4] += e;
         }
+    }
+
+    /// <summary>
+    /// The photon flux vector of one lamp at some of a compiled field's sample points, by the same law as the compile
+    /// (inverse square, the lamp's distribution, the canopy's Beer–Lambert attenuation, bench tops and the enclosure).
+    /// </summary>
+    /// <remarks>For planners that try lamps not in the site (side-lamp placement): one lamp against the field's points,
+    /// without compiling the site again. Writes per point the vector E·û (x, y, z) and the horizontal E·max(0, û·ẑ),
+    /// four doubles per point, at the lamp's PPF × dimming.</remarks>
+    /// <param name="lamp">The lamp (it need not belong to the field's site).</param>
+    /// <param name="field">The compiled field whose points, canopies, bench tops and enclosure are used.</param>
+    /// <param name="points">Indices of the points in <see cref="CompiledLightField.Points"/>.</param>
+    /// <param name="into">Receives 4 × points.Length values.</param>
+    internal static void LampAtPoints(Lamp lamp, CompiledLightField field, ReadOnlySpan<int> points, Span<double> into)
+    {
+        var data = new LampData(lamp, 0);
+        for (int i = 0; i < points.Length; i++)
+        {
+            SamplePoint point = field.Points[points[i]];
+            var canopy = new PointCanopy(field.Benches[point.BenchIndex], point);
+            double e = Irradiance(in data, point.Position, in canopy, field.Enclosure, field.BenchTops, out double ux, out double uy, out double uz);
+            int k = 4 * i;
+            if (e > 0)
+            {
+                into[k] = e * ux;
+                into[k + 1] = e * uy;
+                into[k + 2] = e * uz;
+                into[k + 3] = uz > 0 ? e * uz : 0;
+            }
+            else
+            {
+                into.Slice(k, 4).Clear();
+            }
+        }
+    }
+
+    /// <summary>Normal irradiance of one lamp at one point (0 when it does not reach it) and the unit vector û toward the lamp.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    private static double Irradiance(
+        in LampData lamp, Vector3 point, in PointCanopy canopy, IEnclosure enclosure, BenchTops benchTops,
+        out double ux, out double uy, out double uz)
+    {
+        ux = uy = uz = 0;
+        if (lamp.Flux <= 0)
+        {
+            return 0;
+        }
+
+        // û: unit vector from the point toward the lamp.
+        double dx = lamp.X - point.X, dy = lamp.Y - point.Y, dz = lamp.Z - point.Z;
+        double d2 = (dx * dx) + (dy * dy) + (dz * dz);
+        if (d2 < 1e-12)
+        {
+            return 0;
+        }
+
+        double d = Math.Sqrt(d2);
+        double inverse = 1 / d;
+        ux = dx * inverse;
+        uy = dy * inverse;
+        uz = dz * inverse;
+
+        // Direction leaving the lamp toward the point is −û; in the lamp frame: polar from the axis, around from C = 0°.
+        double cosPolar = -((ux * lamp.AxisX) + (uy * lamp.AxisY) + (uz * lamp.AxisZ));
+        cosPolar = Math.Clamp(cosPolar, -1.0, 1.0);
+        double around = 0;
+        if (!lamp.Symmetric)
+        {
+            around = Math.Atan2(
+                -((ux * lamp.ThirdX) + (uy * lamp.ThirdY) + (uz * lamp.ThirdZ)),
+                -((ux * lamp.RefX) + (uy * lamp.RefY) + (uz * lamp.RefZ)));
+            if (around < 0)
+            {
+                around += 2 * Math.PI;
+            }
+        }
+
+        double intensity = lamp.Distribution.IntensityPerUnitFluxAtCosine(cosPolar, around);
+        if (!(intensity > 0))
+        {
+            return 0;
+        }
+
+        double e = lamp.Flux * intensity / d2;
+        e *= canopy.Transmission(ux, uy, uz, d);
+        if (!(e > 0) || benchTops.BlocksSegment(point, lamp.Position) || enclosure.IsBlocked(point, lamp.Position))
+        {
+            return 0;
+        }
+
+        return e;
     }
 
     private static void Validate(Site site, LightFieldOptions options)
