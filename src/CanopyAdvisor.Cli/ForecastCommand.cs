@@ -17,15 +17,13 @@ namespace CanopyAdvisor.Cli;
 /// <summary><c>canopy forecast</c>: which way and how fast each bench's plants will lean, and how much they will stretch.</summary>
 internal static class ForecastCommand
 {
-    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<+HH:mm>");
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
-        var site = new Argument<string>("site") { Description = "Site file (JSON) with lots, or demo:NAME for a built-in demo site." };
+        Argument<string> site = ForecastInputs.SiteArgument();
         var days = new Option<double>("--days") { Description = "Horizon in days (default 7; up to a year).", DefaultValueFactory = _ => 7 };
-        var now = new Option<string?>("--now") { Description = "Forecast start, ISO-8601 with offset (default: the current time)." };
-        var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV) instead of clear sky × the site's clearness." };
-        var temperatures = new Option<string?>("--temperatures") { Description = "Measured air temperature log (CSV: timestamp, airC) instead of the site's setpoints." };
+        Option<string?> now = ForecastInputs.NowOption("Forecast start");
+        Option<string?> weather = ForecastInputs.WeatherOption();
+        Option<string?> temperatures = ForecastInputs.TemperaturesOption();
         Option<string[]> crops = CropsCommand.CropFoldersOption();
         var noBand = new Option<bool>("--no-band") { Description = "Skip the uncertainty band (faster)." };
         var json = new Option<bool>("--json") { Description = "Print JSON instead of a table." };
@@ -42,47 +40,10 @@ internal static class ForecastCommand
                 throw new InvalidInputException("--days", "must be more than 0 and at most 366");
             }
 
-            Instant start = parse.GetValue(now) is string nowText
-                ? TimeArguments.ParseOffsetDateTime(nowText, "--now").ToInstant()
-                : clock.GetCurrentInstant();
-
-            // Read and check every input before computing: nothing is computed from half-read data.
-            Site model = SiteSource.Load(parse.GetValue(site)!);
-            if (model.Lots.IsDefaultOrEmpty)
-            {
-                throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section (see the site file README)");
-            }
-
-            CropLibrary library = CropsCommand.Load(parse.GetValue(crops));
-            var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
-            foreach (Lot lot in model.Lots)
-            {
-                if (library.TryGet(lot.CropId, out Crop? crop))
-                {
-                    cropsById[lot.CropId] = crop;
-                }
-            }
-
-            string? weatherPath = parse.GetValue(weather);
-            IOutsideLightSource outside = DaylightSource.Create(model, weatherPath);
-            string? temperaturePath = parse.GetValue(temperatures);
-            ITemperatureSource temperature;
-            if (temperaturePath is null)
-            {
-                temperature = new SetpointTemperature(model.Temperatures, model.Location, model.Zone);
-            }
-            else
-            {
-                TemperatureLog log = TemperatureLogReader.ReadFile(temperaturePath);
-                foreach (TemperatureSpike spike in log.Spikes)
-                {
-                    error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"warning: {spike.Where}: {spike.AirC} °C is a spike (neighbours {spike.PreviousAirC} and {spike.NextAirC} °C); left out, not replaced"));
-                }
-
-                temperature = new MeasuredTemperature(log.Records, model.Location, model.Zone);
-            }
-
-            var request = new ForecastRequest(model, cropsById, outside, temperature, start)
+            Instant start = ForecastInputs.Start(parse.GetValue(now), clock);
+            ForecastInputs inputs = ForecastInputs.Load(parse.GetValue(site)!, parse.GetValue(crops), parse.GetValue(weather), parse.GetValue(temperatures), error);
+            Site model = inputs.Site;
+            var request = new ForecastRequest(model, inputs.Crops, inputs.OutsideLight, inputs.Temperature, start)
             {
                 Horizon = Duration.FromHours(dayCount * 24),
                 IncludeUncertainty = !parse.GetValue(noBand),
@@ -90,7 +51,7 @@ internal static class ForecastCommand
             var progress = new ProgressReporter(error, "forecasting", interactive);
             SiteForecast forecast = BenchForecaster.Run(request, progress);
 
-            ForecastReport report = Build(model, forecast, weatherPath, temperaturePath);
+            ForecastReport report = Build(model, forecast, inputs);
             if (parse.GetValue(map) is string mapPath)
             {
                 File.WriteAllText(mapPath, LeanMapSvg.Render(model, forecast, $"{model.Name}: lean forecast to {report.HorizonEnd}"));
@@ -104,9 +65,9 @@ internal static class ForecastCommand
         return command;
     }
 
-    private static ForecastReport Build(Site site, SiteForecast forecast, string? weatherPath, string? temperaturePath)
+    private static ForecastReport Build(Site site, SiteForecast forecast, ForecastInputs inputs)
     {
-        string Format(Instant t) => Printed.Format(t.InZone(site.Zone).ToOffsetDateTime());
+        string Format(Instant t) => ForecastInputs.FormatLocal(t, site.Zone);
         var benches = forecast.Benches.Select(b => new BenchForecastReport(
             b.BenchId,
             b.LotId,
@@ -139,10 +100,8 @@ internal static class ForecastCommand
             Format(forecast.Now),
             Format(forecast.HorizonEnd),
             forecast.Step.TotalMinutes,
-            DaylightSource.Describe(site, weatherPath),
-            temperaturePath is null
-                ? string.Create(CultureInfo.InvariantCulture, $"setpoints {site.Temperatures.DayC}/{site.Temperatures.NightC} °C day/night, pre-dawn drop {site.Temperatures.PreDawnDropC} °C for {site.Temperatures.PreDawnDropHours} h")
-                : $"measured log {Path.GetFileName(temperaturePath)}",
+            inputs.Weather,
+            inputs.Temperatures,
             forecast.MissingLightSteps,
             forecast.MissingTemperatureSteps,
             benches);
