@@ -1,16 +1,10 @@
 using System.CommandLine;
 using System.Globalization;
 using CanopyAdvisor.Core.Forecast;
-using CanopyAdvisor.Core.Plants;
-using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Sites;
-using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Validation;
-using CanopyAdvisor.Files.Crops;
-using CanopyAdvisor.Files.Temperature;
 using CanopyAdvisor.Reports;
 using NodaTime;
-using NodaTime.Text;
 
 namespace CanopyAdvisor.Cli;
 
