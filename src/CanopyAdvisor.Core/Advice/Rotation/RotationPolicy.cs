@@ -51,6 +51,15 @@ public sealed record RotationPolicy
         return new RotationPolicy(angle, interval);
     }
 
+    /// <summary>The first turn of a plan: the later of the first time a turn may be made and the last turn already done
+    /// plus the interval (keeping the bench's rhythm).</summary>
+    /// <param name="notBefore">The first time a turn may be made (now, or the next working time).</param>
+    /// <param name="lastDone">The last turn already done, if any.</param>
+    /// <remarks>It never moves earlier as the interval grows, so the number of turns before a sale never rises with the
+    /// interval: the property the planner's longest-first search rests on.</remarks>
+    public Instant FirstTurn(Instant notBefore, Instant? lastDone) =>
+        lastDone is Instant last && last + Interval > notBefore ? last + Interval : notBefore;
+
     /// <summary>The nominal turn times from <paramref name="first"/> every interval while before <paramref name="before"/>.</summary>
     /// <param name="first">The first turn.</param>
     /// <param name="before">The turns end before this instant (the sale).</param>

@@ -251,11 +251,7 @@ public static class RotationPolicyPlanner
                 return [];
             }
 
-            Instant first = _notBefore;
-            if (_lastDone is Instant last && last + policy.Interval > first)
-            {
-                first = last + policy.Interval;
-            }
+            Instant first = policy.FirstTurn(_notBefore, _lastDone);
 
             Duration half = Duration.FromTicks((long)Math.Round(policy.Interval.TotalTicks * fraction));
             return [.. policy.Times(first, _until).Select(t => new PlannedRotation(

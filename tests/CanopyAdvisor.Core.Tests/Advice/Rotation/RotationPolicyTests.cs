@@ -1,5 +1,6 @@
 using CanopyAdvisor.Core.Advice.Rotation;
 using CanopyAdvisor.Core.Geometry;
+using CsCheck;
 using NodaTime;
 
 namespace CanopyAdvisor.Core.Tests.Advice.Rotation;
@@ -39,4 +40,46 @@ public class RotationPolicyTests
     [InlineData(180, 0)]
     public void A_policy_needs_a_turn_and_an_interval(double angleDeg, int hours) =>
         Assert.Throws<ArgumentOutOfRangeException>(() => RotationPolicy.Every(Angle.FromDegrees(angleDeg), Duration.FromHours(hours)));
+
+    [Fact]
+    public void A_longer_interval_never_needs_more_turns_before_the_sale()
+    {
+        // The property the planner's longest-first search rests on (RotationPolicyPlanner remarks): with the first turn at
+        // the later of the allowed time and the last turn done + T, the count of turns first + kT before the sale is
+        // non-increasing in T (the first turn never moves earlier and the spacing grows). Counting argument, checked here
+        // over random sales, allowed times and last turns on the default grid.
+        Instant now = Instant.FromUtc(2026, 12, 2, 7, 0);
+        Duration[] grid = [.. RotationPolicyOptions.DefaultIntervals.OrderBy(d => d)];
+        Gen.Select(Gen.Int[1, 24 * 120], Gen.Int[0, 24 * 10], Gen.Int[-1, 24 * 20])
+            .Sample((saleHours, waitHours, doneHoursAgo) =>
+            {
+                Instant sale = now + Duration.FromHours(saleHours);
+                Instant notBefore = now + Duration.FromHours(waitHours);
+                Instant? lastDone = doneHoursAgo < 0 ? null : now - Duration.FromHours(doneHoursAgo);
+                int previous = int.MaxValue;
+                foreach (Duration interval in grid)
+                {
+                    var policy = RotationPolicy.Every(Angle.FromDegrees(180), interval);
+                    int count = policy.Times(policy.FirstTurn(notBefore, lastDone), sale).Count();
+                    if (count > previous)
+                    {
+                        return false;
+                    }
+
+                    previous = count;
+                }
+
+                return true;
+            });
+    }
+
+    [Fact]
+    public void The_first_turn_keeps_the_rhythm_of_the_last_one_done()
+    {
+        Instant now = Instant.FromUtc(2026, 12, 2, 7, 0);
+        var every3 = RotationPolicy.Every(Angle.FromDegrees(180), Duration.FromDays(3));
+        Assert.Equal(now, every3.FirstTurn(now, null));
+        Assert.Equal(now + Duration.FromDays(2), every3.FirstTurn(now, now - Duration.FromDays(1)));
+        Assert.Equal(now, every3.FirstTurn(now, now - Duration.FromDays(5))); // overdue: as soon as allowed
+    }
 }
