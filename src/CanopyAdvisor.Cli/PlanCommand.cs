@@ -191,8 +191,8 @@ internal static class PlanCommand
         output.WriteLine();
         output.WriteLine("peak: largest bench-mean lean from now to the sale (a bench over the target now is graded from when the turns have");
         output.WriteLine("brought it back within); target: the grade limit less the margin; each plan was also checked with every turn made");
-        output.WriteLine("at the latest end of its window. Forecasts rest on crop parameters that are mostly estimates: measure lean on a");
-        output.WriteLine("few benches to check them.");
+        output.WriteLine("late in its window, and with turns alternately early and late. Forecasts rest on crop parameters that are mostly");
+        output.WriteLine("estimates: measure lean on a few benches to check them.");
     }
 
     private static double R(double value, int decimals) => Math.Round(value, decimals);

@@ -20,7 +20,9 @@ namespace CanopyAdvisor.Core.Advice.Rotation;
 /// <param name="PeakLeanWithoutPlan">The largest bench lean to <paramref name="CheckedUntil"/> if no more turns are made.</param>
 /// <param name="PeakLeanWithPlan">The largest bench lean to <paramref name="CheckedUntil"/> with the chosen policy on time
 /// (equal to <paramref name="PeakLeanWithoutPlan"/> for no rotation).</param>
-/// <param name="PeakLeanWhenLate">The largest bench lean with every turn at the latest end of its window (null for no rotation).</param>
+/// <param name="PeakLeanWhenLate">The largest bench lean with the turns timed badly inside their windows (every turn at the
+/// latest end, or alternately at the earliest and the latest end; see <see cref="RotationCandidate.LatePeakLean"/>);
+/// null for no rotation.</param>
 /// <param name="Rotations">The planned turns to the sale, in time order, each with its window.</param>
 /// <param name="Candidates">The policies simulated, in the order tried (no rotation first).</param>
 /// <param name="Remedy">What to do besides turning when rotation alone cannot hold the grade; null otherwise.</param>

@@ -11,7 +11,8 @@ namespace CanopyAdvisor.Core.Advice.Rotation;
 /// <param name="Angle">The turn, positive = clockwise from above.</param>
 /// <param name="At">The nominal time of the turn (the policy's grid).</param>
 /// <param name="Earliest">The window's start: the turn may be made from here …</param>
-/// <param name="Latest">… to here; the plan was checked to hold with every turn made at this end.</param>
+/// <param name="Latest">… to here; the plan was checked to hold with every turn made at this end, and with turns made
+/// alternately at either end.</param>
 public sealed record PlannedRotation(string LotId, string BenchId, int Pots, Angle Angle, Instant At, Instant Earliest, Instant Latest)
 {
     /// <summary>The turn as a rotation record at its nominal time (for <c>ForecastRequest.PlannedRotations</c>).</summary>

@@ -35,7 +35,7 @@ public sealed record RotationPolicyOptions
 
     /// <summary>The half-width of each task's window as a fraction of the interval, in [0, 0.5);
     /// <see cref="ModelConstants.RotationWindowFraction"/> (0.25) by default. A plan is only chosen when it still holds
-    /// with every turn made at the latest end of its window; otherwise the window is halved once, and if that fails
+    /// with every turn made at the latest end of its window, and with turns alternately at either end; otherwise the window is halved once, and if that fails
     /// too the next shorter interval is tried.</summary>
     public double WindowFraction { get; init; } = ModelConstants.RotationWindowFraction;
 

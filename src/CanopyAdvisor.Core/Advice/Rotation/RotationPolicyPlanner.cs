@@ -33,15 +33,16 @@ namespace CanopyAdvisor.Core.Advice.Rotation;
 /// interval (equal labour), the lower on-time peak wins, then the order of <see cref="RotationPolicyOptions.Angles"/>.
 /// Plans with the same turns as one already simulated (e.g. a single turn before a near sale) are not run twice.</para>
 /// <para><b>Timing.</b> Each turn gets a window of ± <see cref="RotationPolicyOptions.WindowFraction"/> × the interval
-/// about its nominal time, clipped to the first allowed time and the sale. A policy is only accepted when the plan with
-/// every turn at the latest end of its window also holds; if not, the window is halved and checked again; if that fails
-/// too, the next shorter interval is tried. (A mix of early and late turns can stretch one gap to the interval plus
-/// twice the half-width: the labour calendar should not move a task early and the next one late.) If no policy holds
+/// about its nominal time, clipped to the first allowed time and the sale. A policy is only accepted when the plan also
+/// holds with every turn at the latest end of its window and with turns alternately at the earliest and the latest end
+/// (gaps of the interval ± twice the half-width: the longest a schedule inside the windows can make; delaying every turn
+/// alike mostly shifts the phase of a periodic lean and is a weak test on its own). If not, the window is halved and
+/// checked again; if that fails too, the next shorter interval is tried. If no policy holds
 /// late but some hold on time, the least labour of those is taken with a zero-width window (turn on time). If none
 /// holds at all, the verdict is <see cref="RotationVerdict.RotationCannotHold"/>: the policy with the lowest peak is
 /// given with <see cref="SideLampRemedy"/>.</para>
-/// <para><b>Cost.</b> One single-lot run for a bench that needs no rotation; up to (intervals × angles) × 3 + 1 runs for
-/// one that cannot be held. Lots run in parallel, each search sequential and self-contained, so the result does not
+/// <para><b>Cost.</b> One single-lot run for a bench that needs no rotation; at most 1 + (intervals × angles) on-time
+/// runs and 4 timing runs per policy that holds on time. Lots run in parallel, each search sequential and self-contained, so the result does not
 /// depend on scheduling.</para>
 /// </remarks>
 public static class RotationPolicyPlanner
@@ -130,8 +131,7 @@ public static class RotationPolicyPlanner
             _now = session.Now;
             _sale = lot.SaleOn.AtStartOfDayInZone(session.Request.Site.Zone).ToInstant();
             _until = _sale < session.End ? _sale : session.End;
-            Instant notBefore = options.FirstTurnNotBefore ?? _now;
-            _notBefore = notBefore;
+            _notBefore = options.FirstTurnNotBefore ?? _now;
             ImmutableArray<RotationRecord> history = lot.Rotations.IsDefault ? [] : lot.Rotations;
             _lastDone = history.Where(r => r.At < _now).Select(r => (Instant?)r.At).DefaultIfEmpty(null).Max();
             _nutationPeriod = Duration.FromHours(crop.NutationPeriodHours.Value);
@@ -186,6 +186,8 @@ public static class RotationPolicyPlanner
                     .OrderBy(c => c.Rotations).ThenBy(c => c.PeakLean).FirstOrDefault();
                 if (onTime is not null)
                 {
+                    // With a zero-width window the late plan is the on-time plan, so the candidate holds as shown.
+                    candidates[candidates.IndexOf(onTime)] = onTime with { LatePeakLean = onTime.PeakLean, WindowFraction = 0, Holds = true };
                     ImmutableArray<PlannedRotation> plan = Windows(onTime.Policy, 0);
                     return Advice(RotationVerdict.Rotate, onTime.Policy, nonePeak, onTime.PeakLean.Radians, onTime.PeakLean.Radians, plan, candidates, null);
                 }
@@ -219,7 +221,7 @@ public static class RotationPolicyPlanner
             foreach (double fraction in Fractions())
             {
                 ImmutableArray<PlannedRotation> plan = Windows(policy, fraction);
-                late = fraction == 0 ? peak : PeakOf(plan.Select(r => r.Latest), policy.Angle);
+                late = fraction == 0 ? peak : LatePeak(plan, policy.Angle);
                 if (late <= _target)
                 {
                     return (new RotationCandidate(policy, plan.Length, Angle.FromRadians(peak), Angle.FromRadians(late), fraction, true), plan);
@@ -227,6 +229,21 @@ public static class RotationPolicyPlanner
             }
 
             return (new RotationCandidate(policy, nominal.Length, Angle.FromRadians(peak), Angle.FromRadians(late), 0, false), nominal);
+        }
+
+        /// <summary>The worse of two timings inside the windows: every turn at the latest end, and turns alternately at
+        /// the earliest and the latest end (gaps of the interval ± twice the half-width, the longest a schedule inside
+        /// the windows can make).</summary>
+        private double LatePeak(ImmutableArray<PlannedRotation> plan, Angle angle)
+        {
+            double allLate = PeakOf(plan.Select(r => r.Latest), angle);
+            if (allLate > _target || plan.Length < 2)
+            {
+                return allLate;
+            }
+
+            double alternating = PeakOf(plan.Select((r, i) => i % 2 == 0 ? r.Earliest : r.Latest), angle);
+            return Math.Max(allLate, alternating);
         }
 
         private IEnumerable<double> Fractions()
