@@ -104,6 +104,7 @@ internal static class PlanCommand
                 c.Rotations,
                 R(c.PeakLean.Degrees, 2),
                 c.LatePeakLean is { } l ? R(l.Degrees, 2) : null,
+                c.WindowFraction,
                 c.Holds))]))
             .ToList();
         return new PlanReport(

@@ -36,7 +36,15 @@ public sealed class PlanCommandTests : IDisposable
             int n = b.GetProperty("rotationsToSale").GetInt32();
             turns += n;
             sales[b.GetProperty("lotId").GetString()!] = DateTimeOffset.Parse(b.GetProperty("saleAt").GetString()!, System.Globalization.CultureInfo.InvariantCulture);
-            Assert.NotEmpty(b.GetProperty("candidates").EnumerateArray());
+            foreach (JsonElement candidate in b.GetProperty("candidates").EnumerateArray())
+            {
+                foreach (string field in new[] { "policy", "angleDeg", "intervalHours", "rotations", "peakLeanDeg", "latePeakLeanDeg", "windowFraction", "holds" })
+                {
+                    Assert.True(candidate.TryGetProperty(field, out _), $"candidates: {field} missing");
+                }
+            }
+
+            Assert.Equal("none", b.GetProperty("candidates")[0].GetProperty("policy").GetString());
             switch (verdict)
             {
                 case "noRotationNeeded":
