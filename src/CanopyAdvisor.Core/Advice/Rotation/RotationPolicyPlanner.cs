@@ -20,6 +20,7 @@ namespace CanopyAdvisor.Core.Advice.Rotation;
 /// the target now is graded from the moment it is first back within the target after the first turn (and one nutation
 /// period, so the averaging across the turn does not count as a recovery); it fails if it never gets back. Its
 /// lean now is reported beside the peak.</para>
+/// <para>A lot sold at or before now needs no rotation (its peaks are its lean now).</para>
 /// <para><b>Turn times.</b> The first turn is at the later of <see cref="RotationPolicyOptions.FirstTurnNotBefore"/>
 /// (now by default) and the last turn already done plus the interval (keeping the bench's rhythm); then one every
 /// interval while before the sale (and within the forecast). 90° turns are always clockwise, cycling the four sides
@@ -146,6 +147,13 @@ public static class RotationPolicyPlanner
         {
             BenchForecast none = _session.RunLot(_lot.Id, new LotScenario { PlannedRotations = [] });
             _leanNow = none.LeanNow.Tilt;
+            if (_until <= _now)
+            {
+                // Sold at or before now: nothing left to grade or turn; the lean now stands for both peaks.
+                double now = _leanNow.Radians;
+                return Advice(RotationVerdict.NoRotationNeeded, RotationPolicy.None, now, now, null, [], [new(RotationPolicy.None, 0, _leanNow, null, 0, true)], null);
+            }
+
             double nonePeak = Peak(none.LeanTrack, null);
             var candidates = new List<RotationCandidate> { new(RotationPolicy.None, 0, Angle.FromRadians(nonePeak), null, 0, nonePeak <= _target) };
             if (nonePeak <= _target)

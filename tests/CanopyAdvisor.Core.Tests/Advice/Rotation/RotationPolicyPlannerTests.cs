@@ -252,6 +252,19 @@ public class RotationPolicyPlannerTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void A_lot_sold_before_now_needs_no_turns()
+    {
+        // The sale is at the start of today (local), before now (noon UTC): nothing is left to grade, whatever the target.
+        ForecastSession session = Session(Lot(0));
+        BenchRotationAdvice advice = Assert.Single(RotationPolicyPlanner.Plan(session, RotationPolicyOptions.Default with { Margin = 0.99 }).Benches);
+
+        Assert.True(advice.SaleAt <= session.Now);
+        Assert.Equal(RotationVerdict.NoRotationNeeded, advice.Verdict);
+        Assert.Empty(advice.Rotations);
+        Assert.Equal(advice.LeanNow, advice.PeakLeanWithoutPlan);
+    }
+
+    [Fact]
     public void The_plan_does_not_depend_on_how_the_lots_are_scheduled()
     {
         // Lots run in parallel; each search is self-contained, so two runs and a run of each lot alone agree exactly.
