@@ -19,6 +19,7 @@ internal static class CanopyCommandLine
             SunCommand.Create(output),
             LightCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             ForecastCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
+            PlanCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             OutlookCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             LampsCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             DemoCommand.Create(output),

@@ -10,15 +10,12 @@ using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Temperature;
 using CanopyAdvisor.Reports;
 using NodaTime;
-using NodaTime.Text;
 
 namespace CanopyAdvisor.Cli;
 
 /// <summary><c>canopy forecast</c>: which way and how fast each bench's plants will lean, and how much they will stretch.</summary>
 internal static class ForecastCommand
 {
-    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<+HH:mm>");
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
         var inputs = new ForecastInputs();
@@ -64,7 +61,7 @@ internal static class ForecastCommand
 
     private static ForecastReport Build(Site site, SiteForecast forecast, string? weatherPath, string? temperaturePath)
     {
-        string Format(Instant t) => Printed.Format(t.InZone(site.Zone).ToOffsetDateTime());
+        string Format(Instant t) => ForecastInputs.FormatLocal(t, site.Zone);
         var benches = forecast.Benches.Select(b => new BenchForecastReport(
             b.BenchId,
             b.LotId,

@@ -8,6 +8,7 @@ using CanopyAdvisor.Core.Validation;
 using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Temperature;
 using NodaTime;
+using NodaTime.Text;
 
 namespace CanopyAdvisor.Cli;
 
@@ -15,6 +16,8 @@ namespace CanopyAdvisor.Cli;
 /// <c>--crops</c>) and how they are read into the forecast's inputs.</summary>
 internal sealed class ForecastInputs
 {
+    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<+HH:mm>");
+
     public Argument<string> Site { get; } = new("site") { Description = "Site file (JSON) with lots, or demo:NAME for a built-in demo site." };
 
     public Option<string?> Now { get; } = new("--now") { Description = "Forecast start, ISO-8601 with offset (default: the current time)." };
@@ -78,6 +81,9 @@ internal sealed class ForecastInputs
 
         return new Loaded(model, cropsById, outside, temperature, start, weatherPath, temperaturePath);
     }
+
+    /// <summary>An instant as the site's local time with its offset, to the minute (e.g. <c>2026-12-02T08:00+01:00</c>).</summary>
+    public static string FormatLocal(Instant instant, DateTimeZone zone) => Printed.Format(instant.InZone(zone).ToOffsetDateTime());
 
     /// <summary>One line saying where the air temperatures came from, for reports.</summary>
     public static string DescribeTemperatures(Site site, string? temperaturePath) =>

@@ -82,7 +82,7 @@ internal static class OutlookCommand
             });
 
             Directory.CreateDirectory(folder);
-            string[] written = WriteAll(folder, new Dictionary<string, string>(StringComparer.Ordinal)
+            string[] written = OutputFiles.WriteAll(folder, new Dictionary<string, string>(StringComparer.Ordinal)
             {
                 [PageFile] = OutlookPage.Render(report),
                 [CsvFile] = OutlookCsv.Write(report),
@@ -96,41 +96,5 @@ internal static class OutlookCommand
             return 0;
         });
         return command;
-    }
-
-    /// <summary>Writes each file to a temporary name in the folder, then moves them into place, so no reader ever
-    /// sees a half-written file (a rename within one folder replaces the old file whole). Temporary files are removed
-    /// if a write fails.</summary>
-    internal static string[] WriteAll(string folder, IReadOnlyDictionary<string, string> files)
-    {
-        var temporary = new List<(string Temp, string Final)>();
-        var utf8 = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false);
-        try
-        {
-            foreach (var (name, text) in files)
-            {
-                string final = Path.Combine(folder, name);
-                string temp = Path.Combine(folder, $".{name}.{Guid.NewGuid():N}.tmp");
-                temporary.Add((temp, final));
-                File.WriteAllText(temp, text, utf8);
-            }
-
-            foreach (var (temp, final) in temporary)
-            {
-                File.Move(temp, final, overwrite: true);
-            }
-        }
-        finally
-        {
-            foreach (var (temp, _) in temporary)
-            {
-                if (File.Exists(temp))
-                {
-                    File.Delete(temp);
-                }
-            }
-        }
-
-        return [.. temporary.Select(t => t.Final)];
     }
 }

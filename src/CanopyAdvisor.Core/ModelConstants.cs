@@ -158,4 +158,18 @@ public static class ModelConstants
 
     /// <summary>Highest accepted air temperature from files and setpoints, 60 °C (a choice of this project; see <see cref="AirTemperatureMinimumC"/>).</summary>
     public const double AirTemperatureMaximumC = 60.0;
+
+    /// <summary>
+    /// Default safety margin of a rotation policy, 0.2: the planned bench lean must stay at or below (1 − 0.2) × the
+    /// crop's lean grade limit to the sale date (an estimate of this project, not a measured value: it covers the
+    /// spread of crop parameters and of plants about the bench mean, which the forecast's band shows is wide).
+    /// </summary>
+    public const double RotationGradeMargin = 0.2;
+
+    /// <summary>
+    /// Default half-width of a rotation task's window as a fraction of the rotation interval, 0.25 (a choice of this
+    /// project: ± a quarter interval leaves a crew a whole working day at intervals of 4 days and more, and keeps
+    /// neighbouring windows apart by half an interval).
+    /// </summary>
+    public const double RotationWindowFraction = 0.25;
 }
