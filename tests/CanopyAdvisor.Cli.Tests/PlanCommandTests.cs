@@ -16,7 +16,8 @@ public sealed class PlanCommandTests : IDisposable
     public void Json_gives_every_lot_a_verdict_a_policy_and_its_peaks_and_lists_the_tasks()
     {
         // A 60 % margin leaves some indoor benches over their target without turning (demo data), so turns are planned.
-        var (code, output, error) = CliRunner.Run("plan", "demo:indoor-farm", "--now", IndoorNow, "--margin", "60", "--json");
+        string ics = Path.Combine(_directory, "rotations.ics"), csv = Path.Combine(_directory, "rotations.csv");
+        var (code, output, error) = CliRunner.Run("plan", "demo:indoor-farm", "--now", IndoorNow, "--margin", "60", "--json", "--ics", ics, "--csv", csv);
         Assert.True(code == 0, error);
         using JsonDocument doc = JsonDocument.Parse(output);
         JsonElement root = doc.RootElement;
@@ -84,6 +85,26 @@ public sealed class PlanCommandTests : IDisposable
             Assert.True(at >= previous, "tasks in time order");
             previous = at;
         }
+
+        // The calendar: every task placed on a crew inside its window (MODEL.md §6), or reported as not fitting.
+        JsonElement calendar = root.GetProperty("calendar");
+        JsonElement scheduled = calendar.GetProperty("scheduled");
+        Assert.Equal(turns, scheduled.GetArrayLength() + calendar.GetProperty("unscheduled").GetArrayLength());
+        double hours = 0;
+        foreach (JsonElement t in scheduled.EnumerateArray())
+        {
+            Assert.True(Parse(t, "windowStart") <= Parse(t, "start") && Parse(t, "end") <= Parse(t, "windowEnd"), t.GetProperty("taskId").GetString());
+            Assert.Matches("^lot-.+/r[0-9]+$", t.GetProperty("taskId").GetString()!);
+            hours += t.GetProperty("labourHours").GetDouble();
+        }
+
+        Assert.Equal(hours, calendar.GetProperty("totalHours").GetDouble(), 1);
+
+        // RFC 5545 §3.6.1: one VEVENT per scheduled task; RFC 4180: a header row and one row per scheduled task.
+        string icsText = File.ReadAllText(ics);
+        Assert.StartsWith("BEGIN:VCALENDAR\r\n", icsText, StringComparison.Ordinal);
+        Assert.Equal(scheduled.GetArrayLength(), icsText.Split("BEGIN:VEVENT\r\n").Length - 1);
+        Assert.Equal(scheduled.GetArrayLength() + 1, File.ReadAllText(csv).Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Length);
     }
 
     [Fact]
