@@ -19,6 +19,7 @@ internal static class CanopyCommandLine
             SunCommand.Create(output),
             LightCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             ForecastCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
+            CalibrateCommand.Create(output, error, interactive),
             DemoCommand.Create(output),
             CropsCommand.Create(output),
         };
