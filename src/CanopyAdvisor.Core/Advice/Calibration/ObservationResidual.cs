@@ -20,5 +20,5 @@ public sealed record ObservationResidual(
 {
     /// <summary>The length of the residual lean vector as an angle, degrees: asin of √(east² + north²), about the
     /// tilt error for small leans.</summary>
-    public double MisfitDegrees => Math.Asin(Math.Min(1, Math.Sqrt((EastResidual * EastResidual) + (NorthResidual * NorthResidual)))) * 180 / Math.PI;
+    public double MisfitDegrees => Math.Asin(Math.Min(1, Math.Sqrt((EastResidual * EastResidual) + (NorthResidual * NorthResidual)))) * Geometry.Angle.DegreesPerRadian;
 }
