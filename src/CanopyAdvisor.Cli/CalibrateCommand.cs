@@ -42,7 +42,7 @@ internal static class CalibrateCommand
         };
         var crop = new Option<string?>("--crop") { Description = "Crop id to calibrate (default: the one crop of the observed benches)." };
         var parameters = new Option<string>("--params") { Description = "Parameters to fit, comma-separated: M, gamma, B (default M,gamma).", DefaultValueFactory = _ => "M,gamma" };
-        var now = new Option<string?>("--now") { Description = "Now, ISO-8601 with offset, at or after the last observation (default: the last observation)." };
+        var now = new Option<string?>("--now") { Description = "Now, ISO-8601 with offset, at or after the last observation (default: the last observation, or noon of the observed lots' height measurement if later)." };
         var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV) instead of clear sky × the site's clearness." };
         var temperatures = new Option<string?>("--temperatures") { Description = "Measured air temperature log (CSV: timestamp, airC) instead of the site's setpoints." };
         var iterations = new Option<int>("--max-iterations") { Description = "Most iterations of the fit (default 25).", DefaultValueFactory = _ => CalibrationOptions.Default.MaxIterations };
@@ -64,7 +64,7 @@ internal static class CalibrateCommand
             ImmutableArray<LeanObservation> measured = LoadObservations(parse.GetValue(observations)!);
             Instant start = parse.GetValue(now) is string nowText
                 ? TimeArguments.ParseOffsetDateTime(nowText, "--now").ToInstant()
-                : measured.Max(o => o.At);
+                : DefaultNow(model, measured);
 
             string? outText = parse.GetValue(outPath);
             string? variantId = null;
@@ -127,6 +127,24 @@ internal static class CalibrateCommand
             return 0;
         });
         return command;
+    }
+
+    /// <summary>The last observation, or noon of the latest height measurement of an observed bench's lot when that is
+    /// later (a forecast cannot start before the lot's height was measured).</summary>
+    private static Instant DefaultNow(Site site, ImmutableArray<LeanObservation> measured)
+    {
+        Instant last = measured.Max(o => o.At);
+        var benches = new HashSet<string>(measured.Select(o => o.BenchId), StringComparer.Ordinal);
+        foreach (Lot lot in site.Lots.IsDefault ? [] : site.Lots)
+        {
+            if (lot is not null && benches.Contains(lot.BenchId))
+            {
+                Instant heightMeasured = lot.MeasuredOn.At(new LocalTime(12, 0)).InZoneLeniently(site.Zone).ToInstant();
+                last = heightMeasured > last ? heightMeasured : last;
+            }
+        }
+
+        return last;
     }
 
     private static ImmutableArray<string> ParseParameters(string text)

@@ -68,6 +68,28 @@ public sealed class CalibrateCommandTests : IDisposable
         Assert.Contains("lean.csv:5: benchId: bench 'south-2' carries lot 'lot-south-2' of crop 'pelargonium', not of 'petunia'", error, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Now_defaults_to_the_lots_height_measurement_when_the_observations_end_earlier()
+    {
+        // The demo lot's height was measured on 2026-12-01 (demo site file); these rows of the demo observations end on
+        // 2026-11-26, and a forecast cannot start before the height measurement, so now is its noon.
+        string file = Path.Combine(_directory, "early.csv");
+        File.WriteAllText(file, """
+            benchId,at,tiltDeg,azimuthDeg,heightMm,plants
+            south-1,2026-11-14T11:00:00+01:00,8.37,80.8,,10
+            south-1,2026-11-16T15:00:00+01:00,7.92,87.2,,10
+            south-1,2026-11-20T11:00:00+01:00,8.85,81.5,,10
+            south-1,2026-11-22T15:00:00+01:00,9.24,87.2,,10
+            south-1,2026-11-24T15:00:00+01:00,8.16,266.7,,10
+            south-1,2026-11-26T11:00:00+01:00,2.08,276.8,,10
+            """);
+        var (code, output, error) = CliRunner.Run("calibrate", "demo:glasshouse", "--observations", file, "--json");
+        Assert.True(code == 0, error);
+        using JsonDocument doc = JsonDocument.Parse(output);
+        Assert.Equal("2026-12-01T12:00+01:00", doc.RootElement.GetProperty("now").GetString());
+        Assert.Equal(6, doc.RootElement.GetProperty("residuals").GetArrayLength());
+    }
+
     [Theory]
     [InlineData("--params", "M,delta", "'delta' is not a parameter to fit")]
     [InlineData("--now", "2026-11-20T12:00:00+01:00", "is after now (2026-11-20T12:00+01:00)")]

@@ -157,6 +157,41 @@ public class CropCalibratorTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void The_default_stopping_rule_stops_within_a_small_part_of_a_standard_error_of_a_strict_one()
+    {
+        // The default relative tolerance (1e-4 on the sum of squares) against 1e-9: the estimates may differ only by
+        // a small fraction of their standard errors (a property of the optimum, not a published value).
+        List<LeanObservation> observations = Observe(Truth(1.4, 2.2), Daily("south", TenDays).Concat(Daily("west", TenDays)), 0.01, 5, seed: 11);
+        CalibrationResult loose = CropCalibrator.Fit(Request(), TestCrop.Id, observations);
+        CalibrationResult strict = CropCalibrator.Fit(Request(), TestCrop.Id, observations, CalibrationOptions.Default with { Tolerance = 1e-9, MaxIterations = 60 });
+        output.WriteLine(Describe(loose));
+        output.WriteLine(Describe(strict));
+        for (int k = 0; k < 2; k++)
+        {
+            Assert.InRange(Math.Abs(loose.Estimates[k].Value - strict.Estimates[k].Value), 0, 0.05 * strict.Estimates[k].StandardError);
+        }
+    }
+
+    [Fact]
+    public void Progress_rises_to_one_and_a_cancelled_fit_stops()
+    {
+        List<LeanObservation> observations = Observe(Truth(1.4, 2.2), Daily("south", 1, 3, 5, 7), 0.01, 5, seed: 81);
+        var reports = new List<double>();
+        CropCalibrator.Fit(Request(), TestCrop.Id, observations, progress: new SynchronousProgress(reports.Add));
+        Assert.Equal(1, reports[^1]);
+        Assert.Equal(reports.Order(), reports);
+
+        using var cancelled = new CancellationTokenSource();
+        cancelled.Cancel();
+        Assert.ThrowsAny<OperationCanceledException>(() => CropCalibrator.Fit(Request(), TestCrop.Id, observations, cancellationToken: cancelled.Token));
+    }
+
+    private sealed class SynchronousProgress(Action<double> report) : IProgress<double>
+    {
+        public void Report(double value) => report(value);
+    }
+
+    [Fact]
     public void Fitting_is_deterministic()
     {
         List<LeanObservation> observations = Observe(Truth(1.4, 2.2), Daily("south", 1, 3, 5, 7), 0.01, 5, seed: 61);

@@ -74,6 +74,52 @@ public class LevenbergMarquardtTests
         Assert.Equal(CertifiedSe2, Math.Sqrt(covariance[1, 1]), CertifiedSe2 * 1e-3);
     }
 
+    // NIST StRD MGH10 (Meyer 1970; Moré, Garbow & Hillstrom 1981, problem 10; higher difficulty, generated data):
+    // y = b1·exp(b2 / (x + b3)), 16 observations. Certified b1 = 5.6096364710E-03 (sd 1.5687892471E-04),
+    // b2 = 6.1813463463E+03 (2.3309021107E+01), b3 = 3.4522363462E+02 (7.8486103508E-01), residual sum of squares
+    // 8.7945855171E+01 (the NIST data file as reproduced in several public test suites).
+    private static readonly double[] MghX = [50, 55, 60, 65, 70, 75, 80, 85, 90, 95, 100, 105, 110, 115, 120, 125];
+    private static readonly double[] MghY = [34780, 28610, 23650, 19630, 16370, 13720, 11540, 9744, 8261, 7030, 6005, 5147, 4427, 3820, 3307, 2872];
+
+    private static double[] MghResiduals(double[] b) => [.. MghX.Select((x, i) => (b[0] * Math.Exp(b[1] / (x + b[2]))) - MghY[i])];
+
+    private static double[,] MghJacobian(double[] b, double[] r)
+    {
+        var j = new double[MghX.Length, 3];
+        for (int i = 0; i < MghX.Length; i++)
+        {
+            double d = MghX[i] + b[2];
+            double e = Math.Exp(b[1] / d);
+            j[i, 0] = e;
+            j[i, 1] = b[0] * e / d;
+            j[i, 2] = -b[0] * b[1] * e / (d * d);
+        }
+
+        return j;
+    }
+
+    // From NIST start 1 (2, 400000, 25000) this minimiser does not reach the solution: its first near Gauss–Newton step
+    // takes b1 towards 0, where the model is flat, and it stops there (a trust-region method with a bounded first step,
+    // as in MINPACK, gets through). The calibration always starts from the crop's own values inside a bounded box, so
+    // only start 2 is a check here; the limitation is recorded in the minimiser's remarks.
+    [Theory]
+    [InlineData(0.02, 4000, 250)] // NIST start 2
+    public void Mgh10_a_hard_problem_reaches_the_certified_values_from_the_nearer_start(double b1, double b2, double b3)
+    {
+        double[] low = [double.NegativeInfinity, double.NegativeInfinity, double.NegativeInfinity];
+        double[] high = [double.PositiveInfinity, double.PositiveInfinity, double.PositiveInfinity];
+        LevenbergMarquardtResult fit = LevenbergMarquardt.Minimize(MghResiduals, MghJacobian, [b1, b2, b3], low, high, 2000, 1e-14);
+
+        Assert.Equal(5.6096364710E-03, fit.Point[0], 5.6096364710E-03 * 1e-6);
+        Assert.Equal(6.1813463463E+03, fit.Point[1], 6.1813463463E+03 * 1e-6);
+        Assert.Equal(3.4522363462E+02, fit.Point[2], 3.4522363462E+02 * 1e-6);
+        Assert.Equal(8.7945855171E+01, fit.SumOfSquares, 8.7945855171E+01 * 1e-7);
+        Matrix<double> covariance = fit.Covariance()!;
+        Assert.Equal(1.5687892471E-04, Math.Sqrt(covariance[0, 0]), 1.5687892471E-04 * 1e-4);
+        Assert.Equal(2.3309021107E+01, Math.Sqrt(covariance[1, 1]), 2.3309021107E+01 * 1e-4);
+        Assert.Equal(7.8486103508E-01, Math.Sqrt(covariance[2, 2]), 7.8486103508E-01 * 1e-4);
+    }
+
     [Fact]
     public void A_bound_holds_and_the_other_parameter_is_then_optimal_for_it()
     {
