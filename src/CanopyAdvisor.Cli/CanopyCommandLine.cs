@@ -22,6 +22,7 @@ internal static class CanopyCommandLine
             PlanCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             OutlookCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
             LampsCommand.Create(output, error, interactive, clock ?? SystemClock.Instance),
+            CalibrateCommand.Create(output, error, interactive),
             DemoCommand.Create(output),
             CropsCommand.Create(output),
         };

@@ -86,6 +86,19 @@ public static class CropConversions
         return Find(key).Set(crop, parameter);
     }
 
+    /// <summary>The crop with one parameter's value replaced, keeping its unit, range and provenance (not validated: a
+    /// value outside the range makes an invalid crop, see <see cref="CropValidator"/>).</summary>
+    /// <param name="crop">The crop.</param>
+    /// <param name="key">One of <see cref="ParameterKeys"/>.</param>
+    /// <param name="value">The new value, in the parameter's unit.</param>
+    /// <returns>A copy of the crop with that value.</returns>
+    /// <exception cref="ArgumentOutOfRangeException">The key is not a parameter key (a programming error).</exception>
+    public static Crop WithParameter(this Crop crop, string key, double value)
+    {
+        CropParameter p = crop.GetParameter(key);
+        return crop.WithParameter(key, p.WithValue(value));
+    }
+
     /// <summary>The crop with one parameter's value set to the lower end of its range, for the forecast's
     /// uncertainty band (MODEL.md §7). A crop that passes <see cref="CropValidator"/> stays valid: its ranges are
     /// checked against the other parameters' values.</summary>

@@ -71,6 +71,25 @@ public class CropConversionsTests
     }
 
     [Fact]
+    public void With_parameter_value_changes_only_the_value_of_that_parameter()
+    {
+        // The calibration sets fitted values this way: unit, range and provenance stay until it writes its own.
+        Crop crop = CropValidatorTests.Sample();
+        foreach (string key in CropConversions.ParameterKeys)
+        {
+            CropParameter before = crop.GetParameter(key);
+            Crop updated = crop.WithParameter(key, 0.123);
+            Assert.Equal(before with { Value = 0.123 }, updated.GetParameter(key));
+            foreach (string other in CropConversions.ParameterKeys.Where(k => k != key))
+            {
+                Assert.Same(crop.GetParameter(other), updated.GetParameter(other));
+            }
+        }
+
+        Assert.Throws<ArgumentOutOfRangeException>(() => crop.WithParameter("colour", 1.0));
+    }
+
+    [Fact]
     public void An_unknown_key_is_a_programming_error()
     {
         Assert.False(CropConversions.IsParameterKey("colour"));
