@@ -57,8 +57,7 @@ public sealed record BenchForecast(
     /// <summary>The bench-mean lean, averaged over the nutation period before each sample, every hour of the run from
     /// the lot's simulation start (the spin-up before now) to the end of the horizon; for charts, rotation policies and
     /// calibration against measured lean. Samples fall on the first step edge at or after each whole hour before
-    /// and after now (on the hours themselves after now when the step divides an hour), and on the end; in the spin-up, whose steps are coarser (<see cref="BenchForecaster.SpinUpStep"/>), the average spans as many of
-    /// its steps as one nutation period holds at the forecast step (six periods for 60-minute spin-up steps and a
-    /// 10-minute forecast step).</summary>
+    /// and after now (on the hours themselves after now when the step divides an hour), and on the end; in the spin-up, whose steps are coarser (<see cref="BenchForecaster.SpinUpStep"/>), the average takes the fewer
+    /// step edges that fall within the period.</summary>
     public ImmutableArray<LeanSample> LeanTrack { get; init; } = [];
 }

@@ -58,10 +58,14 @@ internal sealed class BenchRun
         var light = new PointLight[count];
         ElongationPerStep = new double[tl.Count];
         var sampler = new Sampler(count, tl, parameters.NutationPeriod);
-        int ringSize = Math.Max(1, (int)Math.Round(_windowHours / tl.Hours[Math.Min(tl.Count - 1, tl.AnchorEdge)]));
+        // The bench-mean lean vectors of the last nutation period (edges t − period < tₖ ≤ t): as many as the finest
+        // step fits in a period, fewer in the coarser spin-up.
+        int ringSize = Math.Max(1, (int)Math.Round(_windowHours / tl.Hours[Math.Min(tl.Count - 1, tl.AnchorEdge)])) + 1;
         var ringE = new double[ringSize];
         var ringN = new double[ringSize];
+        var ringT = new long[ringSize];
         int ringCount = 0, ringNext = 0;
+        long windowTicks = Duration.FromHours(_windowHours).BclCompatibleTicks;
         double rateFirstEnd = (tl.Edges[tl.AnchorEdge] + Duration.FromHours(_windowHours)).ToUnixTimeTicks();
         double rateLastStart = (tl.Edges[^1] - Duration.FromHours(_windowHours)).ToUnixTimeTicks();
 
@@ -129,24 +133,31 @@ internal sealed class BenchRun
         void Record(int edge, double[] e, double[] n, double mE, double mN)
         {
             sampler.Add(edge, e, n);
+            Instant t = tl.Edges[edge];
             ringE[ringNext] = mE;
             ringN[ringNext] = mN;
+            ringT[ringNext] = t.ToUnixTimeTicks();
             ringNext = (ringNext + 1) % ringSize;
             ringCount = Math.Min(ringCount + 1, ringSize);
-            Instant t = tl.Edges[edge];
             bool tracked = t >= trackNext || edge == tl.Count;
             bool graded = edge >= tl.AnchorEdge && LeavesGradeAt is null && t <= gradeEnd;
             if (tracked || graded)
             {
                 double ae = 0, an = 0;
+                int inWindow = 0;
+                long from = t.ToUnixTimeTicks() - windowTicks;
                 for (int k = 0; k < ringCount; k++)
                 {
-                    ae += ringE[k];
-                    an += ringN[k];
+                    if (ringT[k] > from)
+                    {
+                        ae += ringE[k];
+                        an += ringN[k];
+                        inWindow++;
+                    }
                 }
 
-                ae /= ringCount;
-                an /= ringCount;
+                ae /= inWindow; // the newest entry, at t, is always in the window
+                an /= inWindow;
                 if (tracked)
                 {
                     Track.Add(LeanSample.FromLeanVector(t, ae, an));
