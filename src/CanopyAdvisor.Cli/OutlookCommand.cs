@@ -1,9 +1,14 @@
 using System.CommandLine;
-using System.Text;
+using System.Collections.Immutable;
+using CanopyAdvisor.Core;
+using CanopyAdvisor.Core.Advice;
+using CanopyAdvisor.Core.Advice.Labour;
+using CanopyAdvisor.Core.Advice.Rotation;
 using CanopyAdvisor.Core.Forecast;
 using CanopyAdvisor.Core.Light;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Reports.Calendar;
 using CanopyAdvisor.Reports.Outlook;
 using NodaTime;
 
@@ -21,10 +26,16 @@ internal static class OutlookCommand
     /// <summary>The gist's file name in the output folder (read back next week for the change).</summary>
     public const string SnapshotFile = "outlook.json";
 
+    /// <summary>The rotation calendar's file name in the output folder (iCalendar, RFC 5545).</summary>
+    public const string CalendarFile = "rotations.ics";
+
+    /// <summary>The longest rotation plan checked, 366 days (<c>ForecastRequest.Horizon</c>).</summary>
+    private static readonly Duration MaximumPlanHorizon = Duration.FromDays(366);
+
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
         var inputs = new ForecastInputs();
-        var outFolder = new Option<string?>("--out") { Description = "Folder to write outlook.html, outlook.csv and outlook.json into (created if needed)." };
+        var outFolder = new Option<string?>("--out") { Description = "Folder to write outlook.html, outlook.csv, outlook.json and rotations.ics into (created if needed)." };
         var previous = new Option<string?>("--previous") { Description = "An earlier outlook.json to compare with (default: the one already in the --out folder, if any)." };
         var command = new Command("outlook", "The week's lean outlook of a site: floor map, benches ranked by risk, lean and DLI charts, change against last week; as a printable page, CSV and JSON.")
         {
@@ -34,7 +45,7 @@ internal static class OutlookCommand
         {
             string folder = parse.GetValue(outFolder) is string o && o.Length > 0
                 ? o
-                : throw new InvalidInputException("--out", "is required: the folder to write outlook.html, outlook.csv and outlook.json into");
+                : throw new InvalidInputException("--out", "is required: the folder to write outlook.html, outlook.csv, outlook.json and rotations.ics into");
             if (File.Exists(folder))
             {
                 throw new InvalidInputException("--out", $"'{folder}' is a file, not a folder");
@@ -75,10 +86,24 @@ internal static class OutlookCommand
                 notes.Add(char.ToUpperInvariant(remark[0]) + remark[1..] + ".");
             }
 
+            // The rotation advice to each lot's sale, and its turns on the site's crews.
+            Instant lastSale = site.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(site.Zone).ToInstant());
+            Duration toSale = lastSale - loaded.Now;
+            Duration planHorizon = toSale > MaximumPlanHorizon ? MaximumPlanHorizon : toSale < request.Horizon ? request.Horizon : toSale;
+            ForecastSession planning = ForecastSession.Prepare(request with { Horizon = planHorizon, IncludeUncertainty = false });
+            RotationPlan plan = RotationPolicyPlanner.Plan(planning, RotationPolicyOptions.Default, new ProgressReporter(error, "rotation plan", interactive));
+            LabourSchedule schedule = RotationCalendar.Schedule(site, plan);
+            (ImmutableArray<BenchAdviceSummary> advice, double rotationHours) = OutlookAdvice.From(plan, schedule, forecast.Now, forecast.HorizonEnd);
+            notes.Add(string.Create(
+                System.Globalization.CultureInfo.InvariantCulture,
+                $"Rotation: the least turning that keeps each bench's lean at least {ModelConstants.RotationGradeMargin * 100:0} % under its grade limit to the sale, scheduled on the site's crews (rotations.ics); the lean figures assume nobody turns the pots."));
+
             OutlookReport report = OutlookReport.Build(new OutlookInput(site, forecast, loaded.Crops, BenchDayDli.From(light))
             {
                 Previous = earlier.Snapshot,
                 Notes = notes,
+                Advice = advice,
+                RotationHoursThisWeek = rotationHours,
             });
 
             Directory.CreateDirectory(folder);
@@ -87,6 +112,7 @@ internal static class OutlookCommand
                 [PageFile] = OutlookPage.Render(report),
                 [CsvFile] = OutlookCsv.Write(report),
                 [SnapshotFile] = OutlookSnapshotJson.Write(OutlookSnapshot.From(report)),
+                [CalendarFile] = RotationCalendarIcs.Write(site, schedule, clock.GetCurrentInstant()),
             });
             foreach (string path in written)
             {

@@ -24,12 +24,12 @@ public sealed class OutlookCommandTests : IDisposable
     }
 
     [Fact]
-    public void Writes_three_files_and_nothing_else_then_compares_with_them_a_week_later()
+    public void Writes_four_files_and_nothing_else_then_compares_with_them_a_week_later()
     {
         string folder = Path.Combine(_directory, "out", "week");
         var (code, output, error) = CliRunner.Run("outlook", "demo:glasshouse", "--out", folder, "--now", DemoNow);
         Assert.True(code == 0, error);
-        Assert.Equal(["outlook.csv", "outlook.html", "outlook.json"], Directory.GetFiles(folder).Select(Path.GetFileName).Order());
+        Assert.Equal(["outlook.csv", "outlook.html", "outlook.json", "rotations.ics"], Directory.GetFiles(folder).Select(Path.GetFileName).Order());
         Assert.Contains("forecasting", error, StringComparison.Ordinal);
         Assert.Contains(Path.Combine(folder, "outlook.html"), output, StringComparison.Ordinal);
 
@@ -41,6 +41,13 @@ public sealed class OutlookCommandTests : IDisposable
         Assert.DoesNotContain(page.Descendants(html + "table"), t => (string?)t.Attribute("id") == "change-table");
         Assert.Equal(9, File.ReadAllText(Path.Combine(folder, "outlook.csv")).Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Length);
 
+        // Every bench carries a rotation recommendation (MODEL.md §6), and the calendar is an RFC 5545 calendar.
+        Assert.All(page.Descendants(html + "table").Single(t => (string?)t.Attribute("id") == "ranking-table").Element(html + "tbody")!.Elements(),
+            row => Assert.DoesNotContain("not planned", row.Value, StringComparison.Ordinal));
+        string ics = File.ReadAllText(Path.Combine(folder, "rotations.ics"));
+        Assert.StartsWith("BEGIN:VCALENDAR\r\nVERSION:2.0\r\n", ics, StringComparison.Ordinal);
+        Assert.EndsWith("END:VCALENDAR\r\n", ics, StringComparison.Ordinal);
+
         // A week later into the same folder: the earlier outlook.json is read before it is replaced.
         (code, _, error) = CliRunner.Run("outlook", "demo:glasshouse", "--out", folder, "--now", WeekAfter);
         Assert.True(code == 0, error);
@@ -49,7 +56,7 @@ public sealed class OutlookCommandTests : IDisposable
         Assert.Equal(8, change.Element(html + "tbody")!.Elements().Count());
         using JsonDocument json = JsonDocument.Parse(File.ReadAllText(Path.Combine(folder, "outlook.json")));
         Assert.Equal("2026-W50", json.RootElement.GetProperty("week").GetString());
-        Assert.Equal(["outlook.csv", "outlook.html", "outlook.json"], Directory.GetFiles(folder).Select(Path.GetFileName).Order());
+        Assert.Equal(["outlook.csv", "outlook.html", "outlook.json", "rotations.ics"], Directory.GetFiles(folder).Select(Path.GetFileName).Order());
     }
 
     [Fact]
