@@ -116,7 +116,8 @@ internal static class CalibrateCommand
             CalibrationResult result = CropCalibrator.Fit(request, parse.GetValue(crop), measured, options, progress);
 
             string? written = null;
-            if (outFolder is not null)
+            bool refused = outFolder is not null && !result.Identified;
+            if (outFolder is not null && result.Identified)
             {
                 Crop baseCrop = cropsById[result.CropId];
                 written = CropVariantWriter.WriteToFolder(outFolder, result.Variant, baseCrop, Comment(model, result, measured.Length, parse.GetValue(observations)!.StartsWith(SiteSource.DemoPrefix, StringComparison.Ordinal)));
@@ -124,6 +125,12 @@ internal static class CalibrateCommand
 
             CalibrationReport report = Build(model, result, start, measured.Length, weatherPath, temperaturePath, written);
             JsonOutput.WriteReport(output, report, parse.GetValue(json), WriteText);
+            if (refused)
+            {
+                error.WriteLine("error: the observations cannot identify the parameters (see the warnings); the variant was not saved.");
+                return CanopyCommandLine.InvalidInputExitCode;
+            }
+
             return 0;
         });
         return command;
@@ -239,6 +246,7 @@ internal static class CalibrateCommand
             [.. r.Estimates.Select(e => new CalibrationEstimateReport(e.Key, e.Symbol, S(e.Value), S(e.StandardError), e.PreviousValue, e.Minimum, e.Maximum, e.Unit, e.AtBound))],
             [.. r.Correlation.Select(row => (IReadOnlyList<double>)[.. row.Select(x => R(x, 4))])],
             r.Warnings,
+            r.Identified,
             [.. r.Residuals.Select(x => new CalibrationResidualReport(
                 x.Where,
                 x.BenchId,
@@ -319,7 +327,9 @@ internal static class CalibrateCommand
         output.WriteLine();
         output.WriteLine(r.VariantWrittenTo is string path
             ? $"variant '{r.VariantId}' written to {path}; use it with --crops {Path.GetDirectoryName(Path.GetFullPath(path))} and \"crop\": \"{r.VariantId}\" in the site's lots"
-            : $"variant '{r.VariantId}' not written: give --out FILE.toml or --out FOLDER to save it");
+            : r.Identified
+                ? $"variant '{r.VariantId}' not written: give --out FILE.toml or --out FOLDER to save it"
+                : $"variant '{r.VariantId}' not saved: the observations cannot identify the parameters (see the warnings)");
         output.WriteLine("lean: tilt and compass direction of the bench-mean lean; misfit: length of the lean-vector difference as an angle;");
         output.WriteLine("standard errors reflect the scatter of the measurements under the model, not errors of the model itself.");
     }

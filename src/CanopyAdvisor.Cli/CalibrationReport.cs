@@ -20,6 +20,7 @@ internal sealed record CalibrationReport(
     IReadOnlyList<CalibrationEstimateReport> Estimates,
     IReadOnlyList<IReadOnlyList<double>> Correlation,
     IReadOnlyList<string> Warnings,
+    bool Identified,
     IReadOnlyList<CalibrationResidualReport> Residuals,
     string VariantId,
     string? VariantWrittenTo);

@@ -69,6 +69,26 @@ public sealed class CalibrateCommandTests : IDisposable
     }
 
     [Fact]
+    public void Observations_that_cannot_identify_the_parameters_are_refused_and_nothing_is_saved()
+    {
+        // Issue check: calibration refuses data that cannot identify the parameters. Two leans on one afternoon give
+        // four lean components for two parameters and one moment of bending: M and γ trade off (AC model, MODEL.md §4).
+        string file = Path.Combine(_directory, "one-day.csv");
+        File.WriteAllText(file, """
+            benchId,at,tiltDeg,azimuthDeg,plants
+            south-1,2026-11-20T14:00:00+01:00,8.8,85.1,10
+            south-1,2026-11-20T15:00:00+01:00,8.7,85.3,10
+            """);
+        string path = Path.Combine(_directory, "petunia-one-day.toml");
+        var (code, output, error) = CliRunner.Run("calibrate", "demo:glasshouse", "--observations", file, "--out", path);
+        Assert.Equal(CanopyCommandLine.InvalidInputExitCode, code);
+        Assert.Contains("the data cannot separate M and γ", output, StringComparison.Ordinal);
+        Assert.Contains("not saved: the observations cannot identify the parameters", output, StringComparison.Ordinal);
+        Assert.Contains("the variant was not saved", error, StringComparison.Ordinal);
+        Assert.False(File.Exists(path));
+    }
+
+    [Fact]
     public void Now_defaults_to_the_lots_height_measurement_when_the_observations_end_earlier()
     {
         // The demo lot's height was measured on 2026-12-01 (demo site file); these rows of the demo observations end on

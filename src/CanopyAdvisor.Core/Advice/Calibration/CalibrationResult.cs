@@ -39,4 +39,11 @@ public sealed record CalibrationResult(
     ImmutableArray<string> Warnings,
     Crop Variant,
     Instant FirstObservation,
-    Instant LastObservation);
+    Instant LastObservation)
+{
+    /// <summary>Whether the data identify the fitted parameters: standard errors could be estimated (more lean
+    /// components than parameters, a covariance matrix) and no two estimates correlate at or above
+    /// <see cref="CalibrationOptions.CorrelationWarningLimit"/>. When false the estimates are not to be trusted apart and
+    /// the variant is not to be saved (the warnings say why).</summary>
+    public bool Identified { get; init; }
+}

@@ -550,7 +550,11 @@ public static class CropCalibrator
                 Warnings(fit, done, correlations, covariance),
                 Variant(done, fit.Point, searchErrors, first, last),
                 first,
-                last);
+                last)
+            {
+                Identified = covariance is not null && fit.DegreesOfFreedom > 0
+                    && correlations.SelectMany((row, a) => row.Skip(a + 1)).All(r => Math.Abs(r) < _options.CorrelationWarningLimit),
+            };
         }
 
         private ImmutableArray<string> Warnings(

@@ -38,6 +38,7 @@ public class CropCalibratorTests(ITestOutputHelper output)
         Assert.InRange(Math.Abs(result.Estimates[1].Value - 2.2), 0, 2 * result.Estimates[1].StandardError);
         Assert.True(result.RmsMisfitDegrees < result.InitialRmsMisfitDegrees);
         Assert.DoesNotContain(result.Warnings, w => w.Contains("cannot separate", StringComparison.Ordinal));
+        Assert.True(result.Identified);
         Assert.Equal(observations.Count, result.Residuals.Length);
     }
 
@@ -104,6 +105,7 @@ public class CropCalibratorTests(ITestOutputHelper output)
 
         Assert.True(result.Correlation[0][1] < -0.97, $"correlation {result.Correlation[0][1]}");
         Assert.Contains(result.Warnings, w => w.StartsWith("the data cannot separate M and γ: their estimates correlate at -", StringComparison.Ordinal));
+        Assert.False(result.Identified); // such data are refused: no variant is to be saved from them
         // What the early leans do fix, the product γ·M, is recovered (truth 2.2 × 1.4 = 3.08).
         Assert.Equal(3.08, result.Estimates[0].Value * result.Estimates[1].Value, 0.05 * 3.08);
     }
