@@ -12,15 +12,12 @@ using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Observations;
 using CanopyAdvisor.Files.Temperature;
 using NodaTime;
-using NodaTime.Text;
 
 namespace CanopyAdvisor.Cli;
 
 /// <summary><c>canopy calibrate</c>: fits a crop's M, γ (and B) to measured lean and saves a site variant of the crop.</summary>
 internal static class CalibrateCommand
 {
-    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<+HH:mm>");
-
     private static readonly Dictionary<string, string> ParameterNames = new(StringComparer.OrdinalIgnoreCase)
     {
         ["M"] = "photoCoefficient",
@@ -205,7 +202,7 @@ internal static class CalibrateCommand
     private static List<string> Comment(Site site, CalibrationResult result, int count, bool demo)
     {
         var c = CultureInfo.InvariantCulture;
-        string Format(Instant t) => Printed.Format(t.InZone(site.Zone).ToOffsetDateTime());
+        string Format(Instant t) => ForecastInputs.FormatLocal(t, site.Zone);
         var lines = new List<string>
         {
             $"{result.Variant.Name}: '{result.CropId}' calibrated by canopy calibrate from {count} lean observations,",
@@ -224,7 +221,7 @@ internal static class CalibrateCommand
     private static CalibrationReport Build(
         Site site, CalibrationResult r, Instant now, int count, string? weatherPath, string? temperaturePath, string? written)
     {
-        string Format(Instant t) => Printed.Format(t.InZone(site.Zone).ToOffsetDateTime());
+        string Format(Instant t) => ForecastInputs.FormatLocal(t, site.Zone);
         return new CalibrationReport(
             site.Id,
             site.Name,

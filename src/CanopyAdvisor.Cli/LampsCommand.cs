@@ -2,11 +2,8 @@ using System.CommandLine;
 using System.Globalization;
 using CanopyAdvisor.Core.Advice.SideLamps;
 using CanopyAdvisor.Core.Forecast;
-using CanopyAdvisor.Core.Plants;
-using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Validation;
-using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.SideLamps;
 using CanopyAdvisor.Files.Sites;
 using CanopyAdvisor.Reports;
@@ -18,22 +15,17 @@ namespace CanopyAdvisor.Cli;
 /// <summary><c>canopy lamps</c>: side lamps on the designer's rails that straighten the benches at risk, with before/after.</summary>
 internal static class LampsCommand
 {
-    private static readonly OffsetDateTimePattern Printed = OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mmo<+HH:mm>");
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
-        var site = new Argument<string>("site") { Description = "Site file (JSON) with lots, or demo:NAME for a built-in demo site." };
+        var inputs = new ForecastInputs();
         var brief = new Option<string>("--brief") { Description = "Side-lamp brief (JSON: rails, lamp types, limits), or demo:NAME for a built-in demo brief.", Required = true };
-        var now = new Option<string?>("--now") { Description = "Forecast start, ISO-8601 with offset (default: the current time)." };
         var days = new Option<double>("--days") { Description = "Forecast horizon and planning period in days (default 7; up to 60).", DefaultValueFactory = _ => 7 };
         var seed = new Option<int?>("--seed") { Description = "Seed of the search's random starts (default: the brief's)." };
-        var weather = new Option<string?>("--weather") { Description = "Measured weather log (CSV) instead of clear sky × the site's clearness." };
-        Option<string[]> crops = CropsCommand.CropFoldersOption();
         var json = new Option<bool>("--json") { Description = "Print JSON instead of a table." };
         var map = new Option<string?>("--map") { Description = "Also write light maps (SVG): this file with the proposed lamps, and NAME-before.svg without them." };
         var command = new Command("lamps", "Propose side lamps (rail position, aim, dimming) that balance the blue light on the benches at risk; before/after lean, PPFD, DLI, uniformity, energy and cost.")
         {
-            site, brief, now, days, seed, weather, crops, json, map,
+            inputs.Site, brief, inputs.Now, days, seed, inputs.Weather, inputs.Temperatures, inputs.Crops, json, map,
         };
         command.SetAction(parse =>
         {
@@ -43,38 +35,17 @@ internal static class LampsCommand
                 throw new InvalidInputException("--days", "must be at least 1 and at most 60");
             }
 
-            Instant start = parse.GetValue(now) is string nowText
-                ? TimeArguments.ParseOffsetDateTime(nowText, "--now").ToInstant()
-                : clock.GetCurrentInstant();
-
             // Read and check every input before computing: nothing is computed from half-read data.
-            string siteArgument = parse.GetValue(site)!;
-            Site model = SiteSource.Load(siteArgument);
-            if (model.Lots.IsDefaultOrEmpty)
-            {
-                throw new InvalidInputException("lots", "the site has no crop lots: there is no lean to straighten; add a \"lots\" section (see the site file README)");
-            }
-
-            SideLampBrief plan = LoadBrief(parse.GetValue(brief)!, siteArgument, model);
+            ForecastInputs.Loaded loaded = inputs.Load(parse, clock, error);
+            Site model = loaded.Site;
+            SideLampBrief plan = LoadBrief(parse.GetValue(brief)!, parse.GetValue(inputs.Site)!, model);
             if (parse.GetValue(seed) is int s)
             {
                 plan = plan with { Seed = s };
             }
 
-            CropLibrary library = CropsCommand.Load(parse.GetValue(crops));
-            var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
-            foreach (Lot lot in model.Lots)
-            {
-                if (library.TryGet(lot.CropId, out Crop? crop))
-                {
-                    cropsById[lot.CropId] = crop;
-                }
-            }
-
-            string? weatherPath = parse.GetValue(weather);
-            var request = new ForecastRequest(
-                model, cropsById, DaylightSource.Create(model, weatherPath),
-                new SetpointTemperature(model.Temperatures, model.Location, model.Zone), start)
+            string? weatherPath = loaded.WeatherPath;
+            var request = new ForecastRequest(model, loaded.Crops, loaded.Outside, loaded.Temperature, loaded.Now)
             {
                 Horizon = Duration.FromHours(dayCount * 24),
                 IncludeUncertainty = false,
@@ -125,7 +96,7 @@ internal static class LampsCommand
 
     private static LampsReport Build(Site site, SideLampBrief brief, SideLampPlan plan, string? weatherPath)
     {
-        string Format(Instant t) => Printed.Format(t.InZone(site.Zone).ToOffsetDateTime());
+        string Format(Instant t) => ForecastInputs.FormatLocal(t, site.Zone);
         LampsBenchStateReport State(BenchForecast f, BenchLightFigures light) => new(
             R(f.LeanNow.Tilt.Degrees, 2),
             R(f.LeanAtHorizon.Tilt.Degrees, 2),
