@@ -75,12 +75,7 @@ public sealed class ForecastSession
         var benchesWithCanopy = benches.ToBuilder();
         foreach (BenchForecaster.LotPlan lot in plan.Lots)
         {
-            Bench bench = benches[lot.BenchIndex];
-            double heightM = lot.Lot.HeightMm / ModelConstants.MillimetresPerMetre;
-            double depthM = Math.Min(heightM, lot.Crop.GrowthZoneLengthMm.Value / ModelConstants.MillimetresPerMetre / 2);
-            double spacingRatio = request.ReferenceSpacingM / lot.Lot.SpacingM;
-            double lad = lot.Crop.LeafAreaDensityM2PerM3.Value * spacingRatio * spacingRatio;
-            benchesWithCanopy[lot.BenchIndex] = bench with { Canopy = new Canopy(heightM, depthM, lad) };
+            benchesWithCanopy[lot.BenchIndex] = benches[lot.BenchIndex] with { Canopy = LotCanopy.For(lot.Lot, lot.Crop, request.ReferenceSpacingM) };
         }
 
         Site compiledSite = site with { Benches = benchesWithCanopy.MoveToImmutable() };

@@ -30,11 +30,7 @@ internal static class LotCanopies
                 continue;
             }
 
-            double heightM = lot.HeightMm / ModelConstants.MillimetresPerMetre;
-            double depthM = Math.Min(heightM, crop.GrowthZoneLengthMm.Value / ModelConstants.MillimetresPerMetre / 2);
-            double spacingRatio = request.ReferenceSpacingM / lot.SpacingM;
-            double lad = crop.LeafAreaDensityM2PerM3.Value * spacingRatio * spacingRatio;
-            benches[b] = benches[b] with { Canopy = new Canopy(heightM, depthM, lad) };
+            benches[b] = benches[b] with { Canopy = LotCanopy.For(lot, crop, request.ReferenceSpacingM) };
         }
 
         return site with { Benches = benches.MoveToImmutable() };
