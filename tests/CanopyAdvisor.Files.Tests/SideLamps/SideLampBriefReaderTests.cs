@@ -83,6 +83,7 @@ public class SideLampBriefReaderTests
     [InlineData("lampTypes[0]", "\"side-900\"", "lampTypes[0]", "unknown lamp type 'side-900' (the site defines: toplight-2100, side-600)")]
     [InlineData("lampTypes[0]", "7", "lampTypes[0]", "must be a string")]
     [InlineData("maxLamps", "40", "maxLamps", "must be within [0, 12]")]
+    [InlineData("maxLamps", "-1", "maxLamps", "must be within [0, 12]")] // issue 4 bad input: lamp counts below zero
     [InlineData("maxLamps", "2.5", "maxLamps", "must be an integer")]
     [InlineData("benches", "[\"north-9\"]", "benches[0]", "no bench 'north-9'")]
     [InlineData("riskFraction", "0", "riskFraction", "must be within (0, 1]")]
