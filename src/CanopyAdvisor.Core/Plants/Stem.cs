@@ -64,8 +64,9 @@ public sealed class Stem
 {
     // Delay history: capacity and the smallest spacing between samples as a fraction of τ_g (24 samples at
     // ≥ τ_g/20 always cover τ_g).
-    private const int HistoryCapacity = 24;
-    private const double HistorySpacingFraction = 1.0 / 20.0;
+    // (Internal: StemBundle, the same model arranged for speed, shares them.)
+    internal const int HistoryCapacity = 24;
+    internal const double HistorySpacingFraction = 1.0 / 20.0;
     private const int PolylineCapacity = 24;
 
     private readonly int _n;
@@ -612,7 +613,7 @@ public sealed class Stem
     }
 
     /// <summary>Carries position and frame (t̂, u, v) through one arc of length ds and curvature κ = ku·u + kv·v.</summary>
-    private static void Transport(ref Vector3 t, ref Vector3 u, ref Vector3 v, ref Vector3 p, double ku, double kv, double ds)
+    internal static void Transport(ref Vector3 t, ref Vector3 u, ref Vector3 v, ref Vector3 p, double ku, double kv, double ds)
     {
         double km2 = (ku * ku) + (kv * kv);
         if (km2 == 0)
@@ -655,7 +656,7 @@ public sealed class Stem
         HalfAngle(Math.Sqrt(x2), out cos, out sinc, out oneMinusCosOverX2);
     }
 
-    private static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
+    internal static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x < 0.6)
         {
@@ -830,14 +831,17 @@ public sealed class Stem
 
     private static double DistanceFromAxis(Vector3 point, Vector3 axis) => Vector3.Cross(point, axis).Length;
 
-    private void Orthonormalise()
+    private void Orthonormalise() => Orthonormalise(ref _tb, ref _ub, out _vb);
+
+    /// <summary>Makes the frame (t̂, u, v) orthonormal again: t̂ and u normalised, u made perpendicular to t̂, v = t̂ × u.</summary>
+    internal static void Orthonormalise(ref Vector3 t, ref Vector3 u, out Vector3 v)
     {
-        _tb = _tb.Normalized();
-        _ub = (_ub - (_tb * Vector3.Dot(_ub, _tb))).Normalized();
-        _vb = Vector3.Cross(_tb, _ub);
+        t = t.Normalized();
+        u = (u - (t * Vector3.Dot(u, t))).Normalized();
+        v = Vector3.Cross(t, u);
     }
 
-    private static (Vector3 U, Vector3 V) PerpendicularFrame(Vector3 t)
+    internal static (Vector3 U, Vector3 V) PerpendicularFrame(Vector3 t)
     {
         Vector3 reference = Math.Abs(t.Z) < 0.9 ? Vector3.UnitZ : Vector3.UnitY;
         Vector3 u = (reference - (t * Vector3.Dot(reference, t))).Normalized();
@@ -845,10 +849,10 @@ public sealed class Stem
     }
 
     /// <summary>Clockwise (seen from above) rotation about the vertical: azimuth a becomes a + φ.</summary>
-    private static Vector3 RotateAboutVertical(Vector3 a, double cos, double sin) =>
+    internal static Vector3 RotateAboutVertical(Vector3 a, double cos, double sin) =>
         new((a.X * cos) + (a.Y * sin), (-a.X * sin) + (a.Y * cos), a.Z);
 
-    private static void Validate(StemParameters p, List<ValidationError> errors)
+    internal static void Validate(StemParameters p, List<ValidationError> errors)
     {
         if (!(p.BalanceNumber >= 0) || double.IsInfinity(p.BalanceNumber))
         {
