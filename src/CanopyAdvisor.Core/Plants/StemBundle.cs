@@ -89,8 +89,8 @@ internal sealed class StemBundle
     private readonly Vector<double>[] _frame = []; // [block * FrameStride + field]
     private readonly Vector<double>[] _light = []; // [block * LightStride + 0..2 direction, 3 coefficient]
     private readonly bool[] _blockLit = [];
-    private readonly double[] _lastIntensity = [];
-    private readonly double[] _lastRatio = [];
+    private readonly Vector<double>[] _lastIntensity = []; // per stem: the last intensity and its M(I)
+    private readonly Vector<double>[] _lastRatio = [];
     private readonly double[] _historyTimes = new double[Stem.HistoryCapacity];
 
     // The state all stems share (see Stem for the meaning of each).
@@ -164,9 +164,9 @@ internal sealed class StemBundle
         _frame = new Vector<double>[_blocks * FrameStride];
         _light = new Vector<double>[_blocks * LightStride];
         _blockLit = new bool[_blocks];
-        _lastIntensity = new double[count];
-        _lastRatio = new double[count];
-        _lastIntensity.AsSpan().Fill(double.NaN);
+        _lastIntensity = new Vector<double>[_blocks];
+        _lastRatio = new Vector<double>[_blocks];
+        _lastIntensity.AsSpan().Fill(new Vector<double>(double.NaN));
 
         (Vector3 u, Vector3 v) = Stem.PerpendicularFrame(direction);
         _maturedLength = lengthM - _gz;
@@ -371,34 +371,58 @@ internal sealed class StemBundle
     /// <summary>The light of each stem for this step: direction, M(I) and the light's bending coefficient ε̇ν/L_gz.</summary>
     private void SetLight(double epsDot, ReadOnlySpan<Vector3> blue)
     {
+        // The flux vectors into the lanes (padding lanes stay dark), then intensity and direction on whole vectors:
+        // the same operations as Stem's blue.Length and blue * (1 / intensity).
         Span<double> light = MemoryMarshal.Cast<Vector<double>, double>(_light.AsSpan());
-        Array.Clear(_blockLit);
-        for (int i = 0; i < _count; i++)
+        for (int i = 0; i < blue.Length; i++)
         {
-            Vector3 flux = blue[i];
-            double intensity = flux.Length;
-            double nu = 0;
-            Vector3 lightDir = Vector3.Zero;
-            if (intensity > 0)
+            int block = i / Width;
+            int at = (block * (LightStride - 1) * Width) + i;
+            light[at] = blue[i].X;
+            light[at + Width] = blue[i].Y;
+            light[at + (2 * Width)] = blue[i].Z;
+        }
+
+        Span<double> lastIntensity = MemoryMarshal.Cast<Vector<double>, double>(_lastIntensity.AsSpan());
+        Span<double> lastRatio = MemoryMarshal.Cast<Vector<double>, double>(_lastRatio.AsSpan());
+        var beta = new Vector<double>(_beta);
+        var epsDotVector = new Vector<double>(epsDot);
+        var invGz = new Vector<double>(_invGz);
+        for (int b = 0; b < _blocks; b++)
+        {
+            ref Vector<double> l = ref _light[b * LightStride];
+            Vector<double> x = l, y = Unsafe.Add(ref l, 1), z = Unsafe.Add(ref l, 2);
+            Vector<double> intensity = Vector.SquareRoot((x * x) + (y * y) + (z * z));
+            Vector<long> litLanes = Vector.GreaterThan(intensity, Vector<double>.Zero);
+            Vector<double> ratio;
+            if (_photoB == 0)
             {
-                if (intensity != _lastIntensity[i])
+                ratio = new Vector<double>(_photoA);
+            }
+            else
+            {
+                // M(I) = a·I^b, per stem; kept while the intensity repeats (as Stem does).
+                for (int lane = 0, i = b * Width; lane < Width; lane++, i++)
                 {
-                    _lastIntensity[i] = intensity;
-                    _lastRatio[i] = _photoB == 0 ? _photoA : _photoA * Math.Pow(intensity, _photoB);
+                    double lanesIntensity = intensity[lane];
+                    if (lanesIntensity > 0 && lanesIntensity != lastIntensity[i])
+                    {
+                        lastIntensity[i] = lanesIntensity;
+                        lastRatio[i] = _photoA * Math.Pow(lanesIntensity, _photoB);
+                    }
                 }
 
-                nu = _beta * _lastRatio[i];
-                lightDir = flux * (1 / intensity);
+                ratio = _lastRatio[b];
             }
 
-            double cLight = epsDot * nu * _invGz;
-            int block = i / Width, lane = i - (block * Width);
-            int at = (block * LightStride * Width) + lane;
-            light[at] = lightDir.X;
-            light[at + Width] = lightDir.Y;
-            light[at + (2 * Width)] = lightDir.Z;
-            light[at + (3 * Width)] = cLight;
-            _blockLit[block] |= cLight != 0;
+            Vector<double> inverse = Vector<double>.One / intensity;
+            Vector<double> nu = Vector.ConditionalSelect(litLanes, beta * ratio, Vector<double>.Zero);
+            l = Vector.ConditionalSelect(litLanes, x * inverse, Vector<double>.Zero);
+            Unsafe.Add(ref l, 1) = Vector.ConditionalSelect(litLanes, y * inverse, Vector<double>.Zero);
+            Unsafe.Add(ref l, 2) = Vector.ConditionalSelect(litLanes, z * inverse, Vector<double>.Zero);
+            Vector<double> cLight = epsDotVector * nu * invGz;
+            Unsafe.Add(ref l, 3) = cLight;
+            _blockLit[b] = !Vector.EqualsAll(cLight, Vector<double>.Zero);
         }
     }
 

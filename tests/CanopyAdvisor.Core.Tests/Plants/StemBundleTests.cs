@@ -52,7 +52,7 @@ public class StemBundleTests(ITestOutputHelper output)
             (double offset, double tangent, double travel) = Run(
                 parameters, count, segments, leanDeg, rotationDeg, elongationMmPerH / 1000, steps, vectorised);
             output.WriteLine(
-                $"{label} [{(vectorised ? "vector" : "one by one")}]: max relative difference apex offset {offset:E2}, tangent {tangent:E2}; " +
+                $"{label} [{(vectorised ? $"vector of {System.Numerics.Vector<double>.Count}" : "one by one")}]: max relative difference apex offset {offset:E2}, tangent {tangent:E2}; " +
                 $"apex tangent turned up to {travel:F1}°");
             Assert.InRange(offset, 0, Tolerance);
             Assert.InRange(tangent, 0, Tolerance);
