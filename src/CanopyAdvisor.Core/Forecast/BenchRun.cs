@@ -238,13 +238,10 @@ internal sealed class BenchRun
 
     private static void Measure(StemBundle stems, double[] east, double[] north, out double meanEast, out double meanNorth)
     {
+        stems.HorizontalLean(east, north);
         double se = 0, sn = 0;
         for (int i = 0; i < stems.Count; i++)
         {
-            Vector3 a = stems.ApexOffset(i);
-            double inverse = 1 / a.Length;
-            east[i] = a.X * inverse;
-            north[i] = a.Y * inverse;
             se += east[i];
             sn += north[i];
         }

@@ -849,10 +849,10 @@ public sealed class Stem
     }
 
     /// <summary>Clockwise (seen from above) rotation about the vertical: azimuth a becomes a + φ.</summary>
-    internal static Vector3 RotateAboutVertical(Vector3 a, double cos, double sin) =>
+    private static Vector3 RotateAboutVertical(Vector3 a, double cos, double sin) =>
         new((a.X * cos) + (a.Y * sin), (-a.X * sin) + (a.Y * cos), a.Z);
 
-    internal static void Validate(StemParameters p, List<ValidationError> errors)
+    private static void Validate(StemParameters p, List<ValidationError> errors)
     {
         if (!(p.BalanceNumber >= 0) || double.IsInfinity(p.BalanceNumber))
         {

@@ -245,6 +245,44 @@ internal sealed class StemBundle
     /// <param name="stem">Stem index, 0 to <see cref="Count"/> − 1.</param>
     public Vector3 ApexTangent(int stem) => _scalar is null ? GetStem(stem, ApexTan) : _scalar[stem].ApexTangent;
 
+    /// <summary>
+    /// The east and north components of each stem's apex direction seen from its pot (the unit vector of
+    /// <see cref="ApexOffset"/>), the horizontal lean vector whose length is the sine of the lean.
+    /// </summary>
+    /// <param name="east">Receives one value per stem.</param>
+    /// <param name="north">Receives one value per stem.</param>
+    public void HorizontalLean(Span<double> east, Span<double> north)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(east.Length, _count, nameof(east));
+        ArgumentOutOfRangeException.ThrowIfLessThan(north.Length, _count, nameof(north));
+        if (_scalar is not null)
+        {
+            for (int i = 0; i < _count; i++)
+            {
+                Vector3 a = _scalar[i].ApexOffset;
+                double inverse = 1 / a.Length;
+                east[i] = a.X * inverse;
+                north[i] = a.Y * inverse;
+            }
+
+            return;
+        }
+
+        // As a.X * (1 / a.Length) per stem, on whole vectors.
+        for (int b = 0; b < _blocks; b++)
+        {
+            ref Vector<double> apex = ref _frame[(b * FrameStride) + Apex];
+            Vector<double> x = apex, y = Unsafe.Add(ref apex, 1), z = Unsafe.Add(ref apex, 2);
+            Vector<double> inverse = Vector<double>.One / Vector.SquareRoot((x * x) + (y * y) + (z * z));
+            Vector<double> e = x * inverse, n = y * inverse;
+            for (int lane = 0, i = b * Width; lane < Width && i < _count; lane++, i++)
+            {
+                east[i] = e[lane];
+                north[i] = n[lane];
+            }
+        }
+    }
+
     /// <summary>Advances every stem by one time step under its own blue light (as <see cref="Stem.Step"/> for each).</summary>
     /// <param name="dt">Time step.</param>
     /// <param name="elongationMetresPerHour">Elongation rate Ė shared by all stems, m/h.</param>

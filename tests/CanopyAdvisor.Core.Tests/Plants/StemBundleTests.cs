@@ -49,13 +49,15 @@ public class StemBundleTests(ITestOutputHelper output)
             Duration.FromMinutes(delayH * 60));
         foreach (bool vectorised in new[] { true, false })
         {
-            (double offset, double tangent, double travel) = Run(
+            (double offset, double tangent, double lean, double travel) = Run(
                 parameters, count, segments, leanDeg, rotationDeg, elongationMmPerH / 1000, steps, vectorised);
             output.WriteLine(
                 $"{label} [{(vectorised ? $"vector of {System.Numerics.Vector<double>.Count}" : "one by one")}]: max relative difference apex offset {offset:E2}, tangent {tangent:E2}; " +
+                $"max difference of the horizontal lean vector {lean:E2}; " +
                 $"apex tangent turned up to {travel:F1}°");
             Assert.InRange(offset, 0, Tolerance);
             Assert.InRange(tangent, 0, Tolerance);
+            Assert.InRange(lean, 0, Tolerance);
         }
     }
 
@@ -98,9 +100,11 @@ public class StemBundleTests(ITestOutputHelper output)
 
     /// <summary>
     /// Steps a bundle and its single-stem twins through a varied schedule and returns the largest relative differences
-    /// of apex offset and apex tangent over all steps and stems, and how far any apex tangent turned from vertical.
+    /// of apex offset and apex tangent over all steps and stems, the largest difference of the horizontal lean vector
+    /// (east, north of the unit apex offset; absolute, as it is near zero for upright stems), and how far any apex tangent
+    /// turned from vertical.
     /// </summary>
-    private static (double Offset, double Tangent, double TravelDeg) Run(
+    private static (double Offset, double Tangent, double Lean, double TravelDeg) Run(
         StemParameters parameters, int count, int segments, double leanDeg, double rotationDeg, double elongationMPerH,
         int steps, bool vectorised)
     {
@@ -115,7 +119,9 @@ public class StemBundleTests(ITestOutputHelper output)
         var blue = new Vector3[count];
         double offset = Compare(bundle, stems, (b, i) => b.ApexOffset(i), s => s.ApexOffset);
         double tangent = Compare(bundle, stems, (b, i) => b.ApexTangent(i), s => s.ApexTangent);
-        double travel = 0;
+        double travel = 0, leanDifference = 0;
+        var east = new double[count];
+        var north = new double[count];
         for (int k = 0; k < steps; k++)
         {
             // Steps of 10 min, every 50th of 30 min, every 97th of 60 min (several freezes in one step at high
@@ -162,11 +168,17 @@ public class StemBundleTests(ITestOutputHelper output)
 
             offset = Math.Max(offset, Compare(bundle, stems, (b, i) => b.ApexOffset(i), s => s.ApexOffset));
             tangent = Math.Max(tangent, Compare(bundle, stems, (b, i) => b.ApexTangent(i), s => s.ApexTangent));
+            bundle.HorizontalLean(east, north);
+            for (int i = 0; i < count; i++)
+            {
+                Vector3 unit = stems[i].ApexOffset * (1 / stems[i].ApexOffset.Length); // as the forecast measured single stems
+                leanDifference = Math.Max(leanDifference, Math.Max(Math.Abs(east[i] - unit.X), Math.Abs(north[i] - unit.Y)));
+            }
         }
 
         Assert.Equal(stems[0].Elapsed, bundle.Elapsed);
         Assert.Equal(stems[0].LengthM, bundle.LengthM);
-        return (offset, tangent, travel);
+        return (offset, tangent, leanDifference, travel);
     }
 
     private static double Compare(StemBundle bundle, Stem[] stems, Func<StemBundle, int, Vector3> ofBundle, Func<Stem, Vector3> ofStem)
