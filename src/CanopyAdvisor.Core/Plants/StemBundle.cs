@@ -545,18 +545,24 @@ internal sealed class StemBundle
             InverseWeight = inverseWeight,
             BasalTakesState = bend && !accumulate && oldWeight == 0,
         };
+        // Stem.Walk's two passes, each over all vectors of stems: the carrying pass is a dependent chain per vector,
+        // and running the chains of consecutive vectors back to back lets them overlap.
         for (int b = 0; b < _blocks; b++)
         {
-            WalkBlock(b, in shared);
+            SenseAndBend(b, in shared);
+        }
+
+        for (int b = 0; b < _blocks; b++)
+        {
+            Carry(b);
         }
     }
 
-    /// <summary>The two passes of Stem.Walk for one vector of stems: sensing and bending per segment, then the frame
-    /// carried from the growth zone's base to the apex.</summary>
-    private void WalkBlock(int block, in StemBundleWalkTerms w)
+    /// <summary>Stem.Walk's first pass for one vector of stems: sensing and bending per segment, and the arc functions
+    /// of the curvature drawn.</summary>
+    private void SenseAndBend(int block, in StemBundleWalkTerms w)
     {
         int n = _n, head = _head;
-        var ds = new Vector<double>(_ds);
         double halfDsScalar = 0.5 * _ds;
         var halfDs = new Vector<double>(halfDsScalar);
         var halfDs2 = new Vector<double>(halfDsScalar * halfDsScalar);
@@ -565,7 +571,6 @@ internal sealed class StemBundle
         var gain = new Vector<double>(w.Gain);
         var cGravity = new Vector<double>(w.CGravity);
         var readWeight = new Vector<double>(w.ReadWeight);
-        var one = Vector<double>.One;
 
         ref Vector<double> frame = ref _frame[block * FrameStride];
         ref Vector<double> lightRef = ref _light[block * LightStride];
@@ -675,6 +680,17 @@ internal sealed class StemBundle
             }
         }
 
+    }
+
+    /// <summary>Stem.Walk's second pass for one vector of stems: the frame carried from the growth zone's base to the
+    /// apex through each segment's arc.</summary>
+    private void Carry(int block)
+    {
+        int n = _n, head = _head;
+        var ds = new Vector<double>(_ds);
+        var one = Vector<double>.One;
+        ref Vector<double> frame = ref _frame[block * FrameStride];
+        ref Vector<double> seg0 = ref _seg[block * n * SegmentStride];
         Vector<double> cx = Unsafe.Add(ref frame, Tb), cy = Unsafe.Add(ref frame, Tb + 1), cz = Unsafe.Add(ref frame, Tb + 2);
         Vector<double> ax = Unsafe.Add(ref frame, Ub), ay = Unsafe.Add(ref frame, Ub + 1), az = Unsafe.Add(ref frame, Ub + 2);
         Vector<double> bx = Unsafe.Add(ref frame, Vb), by = Unsafe.Add(ref frame, Vb + 1), bz = Unsafe.Add(ref frame, Vb + 2);
