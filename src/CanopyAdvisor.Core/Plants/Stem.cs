@@ -231,6 +231,18 @@ public sealed class Stem
     /// <exception cref="InvalidInputException">Any parameter is out of range (every problem is listed).</exception>
     public static Stem Leaning(StemParameters parameters, double heightM, Angle lean, Angle azimuth, int growthZoneSegments = 8)
     {
+        List<ValidationError> errors = CheckStart(parameters, heightM, lean, azimuth, growthZoneSegments);
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+
+        return new Stem(parameters, heightM, Direction.FromAzimuthZenith(azimuth, lean), growthZoneSegments);
+    }
+
+    /// <summary>Every problem with the parameters and start shape of a stem (also used by StemBundle).</summary>
+    internal static List<ValidationError> CheckStart(StemParameters parameters, double heightM, Angle lean, Angle azimuth, int growthZoneSegments)
+    {
         ArgumentNullException.ThrowIfNull(parameters);
         var errors = new List<ValidationError>();
         Validate(parameters, errors);
@@ -254,12 +266,7 @@ public sealed class Stem
             errors.Add(new ValidationError("azimuth", "must be finite"));
         }
 
-        if (errors.Count > 0)
-        {
-            throw new InvalidInputException(errors);
-        }
-
-        return new Stem(parameters, heightM, Direction.FromAzimuthZenith(azimuth, lean), growthZoneSegments);
+        return errors;
     }
 
     /// <summary>Advances the stem by one time step: bending in the growth zone and new length at the apex.</summary>

@@ -119,15 +119,15 @@ internal sealed class StemBundle
     private double _lastNutRe;
     private double _lastNutIm;
 
-    private StemBundle(Stem prototype, double lengthM, Vector3 direction, int count, bool vectorised)
+    private StemBundle(StemParameters parameters, double lengthM, Angle lean, Angle azimuth, int count, int growthZoneSegments, bool vectorised)
     {
-        StemParameters parameters = prototype.Parameters;
         Parameters = parameters;
         _count = count;
-        _n = prototype.GrowthZoneSegments;
+        _n = growthZoneSegments;
         if (!vectorised)
         {
             _scalar = new Stem[count];
+            Stem prototype = Stem.Leaning(parameters, lengthM, lean, azimuth, growthZoneSegments);
             for (int i = 0; i < count; i++)
             {
                 _scalar[i] = i == 0 ? prototype : prototype.Clone();
@@ -168,6 +168,7 @@ internal sealed class StemBundle
         _lastRatio = new Vector<double>[_blocks];
         _lastIntensity.AsSpan().Fill(new Vector<double>(double.NaN));
 
+        Vector3 direction = Direction.FromAzimuthZenith(azimuth, lean);
         (Vector3 u, Vector3 v) = Stem.PerpendicularFrame(direction);
         _maturedLength = lengthM - _gz;
         Vector3 basePoint = direction * _maturedLength;
@@ -227,14 +228,19 @@ internal sealed class StemBundle
     internal static StemBundle Create(
         StemParameters parameters, double heightM, Angle lean, Angle azimuth, int count, int growthZoneSegments, bool vectorised)
     {
-        // Stem.Leaning checks the parameters, height, segments and angles exactly as for a single stem.
-        Stem reference = Stem.Leaning(parameters, heightM, lean, azimuth, growthZoneSegments);
+        // The parameters, height, segments and angles are checked exactly as for a single stem.
+        List<ValidationError> errors = Stem.CheckStart(parameters, heightM, lean, azimuth, growthZoneSegments);
         if (count is < 1 or > 4096)
         {
-            throw new InvalidInputException([new ValidationError("count", "must be 1 to 4,096")]);
+            errors.Add(new ValidationError("count", "must be 1 to 4,096"));
         }
 
-        return new StemBundle(reference, heightM, Direction.FromAzimuthZenith(azimuth, lean), count, vectorised);
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+
+        return new StemBundle(parameters, heightM, lean, azimuth, count, growthZoneSegments, vectorised);
     }
 
     /// <summary>Apex position of one stem relative to its pot, m, site frame.</summary>

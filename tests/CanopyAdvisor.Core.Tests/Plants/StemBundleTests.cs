@@ -95,6 +95,15 @@ public class StemBundleTests(ITestOutputHelper output)
         Assert.Contains(e.Errors, x => x.Path == "count");
     }
 
+    [Fact]
+    public void Every_problem_with_the_start_is_listed_at_once()
+    {
+        // Contract: "report every problem" (the validation rules of Stem.Leaning, plus the stem count).
+        InvalidInputException e = Assert.Throws<InvalidInputException>(
+            () => StemBundle.Leaning(Parameters(), 0.01, Angle.FromDegrees(200), Angle.Zero, 0, 0));
+        Assert.Equal(["heightM", "growthZoneSegments", "lean", "count"], e.Errors.Select(x => x.Path));
+    }
+
     private static StemParameters Parameters() =>
         new(2.0, 1.5, 0.05, 0.5, 0.03, Duration.FromHours(2), Angle.FromDegrees(8), 1, Duration.FromHours(1));
 
