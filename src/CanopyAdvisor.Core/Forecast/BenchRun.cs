@@ -48,14 +48,10 @@ internal sealed class BenchRun
         double dliFallback, Instant gradeEnd, double gradeLimitRadians)
     {
         ForecastTimeline tl = _timeline;
-        var stems = new Stem[count];
-        Stem prototype = Stem.Upright(parameters, startHeightM, segments);
-        for (int i = 0; i < count; i++)
-        {
-            stems[i] = i == 0 ? prototype : prototype.Clone();
-        }
-
+        // All points of the bench share parameters, steps, elongation and rotations: one bundle steps them together.
+        StemBundle stems = StemBundle.Upright(parameters, startHeightM, count, segments);
         var light = new PointLight[count];
+        var blue = new Vector3[count];
         ElongationPerStep = new double[tl.Count];
         var sampler = new Sampler(count, tl, parameters.NutationPeriod);
         // The bench-mean lean vectors of the last nutation period (edges t − period < tₖ ≤ t): as many as the finest
@@ -89,6 +85,7 @@ internal sealed class BenchRun
                 ppfd += light[i].HorizontalPpfd;
                 red += light[i].Red660;
                 farRed += light[i].FarRed730;
+                blue[i] = light[i].BlueVector;
             }
 
             ppfd /= count;
@@ -102,11 +99,7 @@ internal sealed class BenchRun
 
             double e = rate.MetresPerHour(tl.AirC[s], tl.DifK[s], pss, recentDli);
             ElongationPerStep[s] = e;
-            Duration dt = tl.Steps[s];
-            for (int i = 0; i < count; i++)
-            {
-                stems[i].Step(dt, e, light[i].BlueVector);
-            }
+            stems.Step(tl.Steps[s], e, blue);
 
             if (s >= tl.AnchorEdge)
             {
@@ -199,7 +192,7 @@ internal sealed class BenchRun
     {
         ForecastTimeline tl = _timeline;
         int count = points.Length, v = variants.Count;
-        var stems = new Stem[v][];
+        var stems = new StemBundle[v];
         var samplers = new Sampler[v];
         var east = new double[count];
         var north = new double[count];
@@ -207,11 +200,7 @@ internal sealed class BenchRun
         for (int k = 0; k < v; k++)
         {
             StemParameters parameters = variants[k].Parameters;
-            stems[k] = new Stem[count];
-            for (int i = 0; i < count; i++)
-            {
-                stems[k][i] = Stem.Upright(parameters, Math.Max(startHeightM, parameters.GrowthZoneLengthM), segments);
-            }
+            stems[k] = StemBundle.Upright(parameters, Math.Max(startHeightM, parameters.GrowthZoneLengthM), count, segments);
 
             samplers[k] = new Sampler(count, tl, parameters.NutationPeriod);
             Measure(stems[k], east, north, out _, out _);
@@ -237,11 +226,7 @@ internal sealed class BenchRun
             Duration dt = tl.Steps[s];
             for (int k = 0; k < v; k++)
             {
-                double e = elongation[s] * variants[k].Scale;
-                for (int i = 0; i < count; i++)
-                {
-                    stems[k][i].Step(dt, e, blue[i]);
-                }
+                stems[k].Step(dt, elongation[s] * variants[k].Scale, blue);
 
                 Measure(stems[k], east, north, out _, out _);
                 samplers[k].Add(s + 1, east, north);
@@ -262,21 +247,18 @@ internal sealed class BenchRun
         return result;
     }
 
-    private static void Measure(Stem[] stems, double[] east, double[] north, out double meanEast, out double meanNorth)
+    private static void Measure(StemBundle stems, double[] east, double[] north, out double meanEast, out double meanNorth)
     {
+        stems.HorizontalLean(east, north);
         double se = 0, sn = 0;
-        for (int i = 0; i < stems.Length; i++)
+        for (int i = 0; i < stems.Count; i++)
         {
-            Vector3 a = stems[i].ApexOffset;
-            double inverse = 1 / a.Length;
-            east[i] = a.X * inverse;
-            north[i] = a.Y * inverse;
             se += east[i];
             sn += north[i];
         }
 
-        meanEast = se / stems.Length;
-        meanNorth = sn / stems.Length;
+        meanEast = se / stems.Count;
+        meanNorth = sn / stems.Count;
     }
 
     private int SkipRotationsBefore(Instant start)
@@ -291,16 +273,11 @@ internal sealed class BenchRun
     }
 
     // Rotations done before the end of a step are applied at its start (the step grid resolves their time to one step).
-    private int ApplyRotations(Stem[] stems, int next, Instant stepEnd)
+    private int ApplyRotations(StemBundle stems, int next, Instant stepEnd)
     {
         while (next < _rotations.Length && _rotations[next].At < stepEnd)
         {
-            Angle angle = _rotations[next].Angle;
-            foreach (Stem stem in stems)
-            {
-                stem.RotatePot(angle);
-            }
-
+            stems.RotatePot(_rotations[next].Angle);
             next++;
         }
 

@@ -64,8 +64,9 @@ public sealed class Stem
 {
     // Delay history: capacity and the smallest spacing between samples as a fraction of τ_g (24 samples at
     // ≥ τ_g/20 always cover τ_g).
-    private const int HistoryCapacity = 24;
-    private const double HistorySpacingFraction = 1.0 / 20.0;
+    // (Internal: StemBundle, the same model arranged for speed, shares them.)
+    internal const int HistoryCapacity = 24;
+    internal const double HistorySpacingFraction = 1.0 / 20.0;
     private const int PolylineCapacity = 24;
 
     private readonly int _n;
@@ -230,6 +231,18 @@ public sealed class Stem
     /// <exception cref="InvalidInputException">Any parameter is out of range (every problem is listed).</exception>
     public static Stem Leaning(StemParameters parameters, double heightM, Angle lean, Angle azimuth, int growthZoneSegments = 8)
     {
+        List<ValidationError> errors = CheckStart(parameters, heightM, lean, azimuth, growthZoneSegments);
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+
+        return new Stem(parameters, heightM, Direction.FromAzimuthZenith(azimuth, lean), growthZoneSegments);
+    }
+
+    /// <summary>Every problem with the parameters and start shape of a stem (also used by StemBundle).</summary>
+    internal static List<ValidationError> CheckStart(StemParameters parameters, double heightM, Angle lean, Angle azimuth, int growthZoneSegments)
+    {
         ArgumentNullException.ThrowIfNull(parameters);
         var errors = new List<ValidationError>();
         Validate(parameters, errors);
@@ -253,12 +266,7 @@ public sealed class Stem
             errors.Add(new ValidationError("azimuth", "must be finite"));
         }
 
-        if (errors.Count > 0)
-        {
-            throw new InvalidInputException(errors);
-        }
-
-        return new Stem(parameters, heightM, Direction.FromAzimuthZenith(azimuth, lean), growthZoneSegments);
+        return errors;
     }
 
     /// <summary>Advances the stem by one time step: bending in the growth zone and new length at the apex.</summary>
@@ -612,7 +620,7 @@ public sealed class Stem
     }
 
     /// <summary>Carries position and frame (t̂, u, v) through one arc of length ds and curvature κ = ku·u + kv·v.</summary>
-    private static void Transport(ref Vector3 t, ref Vector3 u, ref Vector3 v, ref Vector3 p, double ku, double kv, double ds)
+    internal static void Transport(ref Vector3 t, ref Vector3 u, ref Vector3 v, ref Vector3 p, double ku, double kv, double ds)
     {
         double km2 = (ku * ku) + (kv * kv);
         if (km2 == 0)
@@ -655,7 +663,7 @@ public sealed class Stem
         HalfAngle(Math.Sqrt(x2), out cos, out sinc, out oneMinusCosOverX2);
     }
 
-    private static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
+    internal static void HalfAngle(double x, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
         if (x < 0.6)
         {
@@ -830,14 +838,17 @@ public sealed class Stem
 
     private static double DistanceFromAxis(Vector3 point, Vector3 axis) => Vector3.Cross(point, axis).Length;
 
-    private void Orthonormalise()
+    private void Orthonormalise() => Orthonormalise(ref _tb, ref _ub, out _vb);
+
+    /// <summary>Makes the frame (t̂, u, v) orthonormal again: t̂ and u normalised, u made perpendicular to t̂, v = t̂ × u.</summary>
+    internal static void Orthonormalise(ref Vector3 t, ref Vector3 u, out Vector3 v)
     {
-        _tb = _tb.Normalized();
-        _ub = (_ub - (_tb * Vector3.Dot(_ub, _tb))).Normalized();
-        _vb = Vector3.Cross(_tb, _ub);
+        t = t.Normalized();
+        u = (u - (t * Vector3.Dot(u, t))).Normalized();
+        v = Vector3.Cross(t, u);
     }
 
-    private static (Vector3 U, Vector3 V) PerpendicularFrame(Vector3 t)
+    internal static (Vector3 U, Vector3 V) PerpendicularFrame(Vector3 t)
     {
         Vector3 reference = Math.Abs(t.Z) < 0.9 ? Vector3.UnitZ : Vector3.UnitY;
         Vector3 u = (reference - (t * Vector3.Dot(reference, t))).Normalized();
