@@ -67,6 +67,10 @@ public sealed class Stem
     // (Internal: StemBundle, the same model arranged for speed, shares them.)
     internal const int HistoryCapacity = 24;
     internal const double HistorySpacingFraction = 1.0 / 20.0;
+    /// <summary>Below this x² (x = θ/2, i.e. x &lt; 0.6) the arc functions are summed from their Taylor series (error
+    /// below 1e-12); above it the library's sine and cosine are used. Shared with <see cref="StemBundle"/>.</summary>
+    internal const double ArcSeriesLimit = 0.36;
+
     private const int PolylineCapacity = 24;
 
     private readonly int _n;
@@ -647,7 +651,7 @@ public sealed class Stem
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void ArcFunctions(double x2, out double cos, out double sinc, out double oneMinusCosOverX2)
     {
-        if (x2 < 0.36)
+        if (x2 < ArcSeriesLimit)
         {
             // The same Taylor terms as HalfAngle, summed in pairs (Estrin's scheme): a shorter dependent chain than
             // nested multiplication, and this chain lies on every segment's path from sensing to transport.

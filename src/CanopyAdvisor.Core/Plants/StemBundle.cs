@@ -62,8 +62,6 @@ internal sealed class StemBundle
     private const int BasalSumV = 19;
     private const int LightStride = 4;
 
-    // Above this x² = (θ/2)² the arc functions use the library (as in Stem.ArcFunctions).
-    private const double ArcSeriesLimit = 0.36;
 
     private static readonly int Width = Vector<double>.Count;
 
@@ -680,7 +678,7 @@ internal sealed class StemBundle
             Unsafe.Add(ref g, DrawnV) = dkv;
             Vector<double> x2 = ((dku * dku) + (dkv * dkv)) * quarterDs2;
             ArcFunctions(x2, out Unsafe.Add(ref g, Ch), out Unsafe.Add(ref g, Hs), out Unsafe.Add(ref g, Omc));
-            if (!Vector.LessThanAll(x2, new Vector<double>(ArcSeriesLimit)))
+            if (!Vector.LessThanAll(x2, new Vector<double>(Stem.ArcSeriesLimit)))
             {
                 LargeArcs(x2, ref g);
             }
@@ -775,7 +773,7 @@ internal sealed class StemBundle
         for (int lane = 0; lane < Width; lane++)
         {
             double x2Lane = x2[lane];
-            if (!(x2Lane < ArcSeriesLimit))
+            if (!(x2Lane < Stem.ArcSeriesLimit))
             {
                 Stem.HalfAngle(Math.Sqrt(x2Lane), out Unsafe.Add(ref ch, lane), out Unsafe.Add(ref hs, lane), out Unsafe.Add(ref omc, lane));
             }
