@@ -25,7 +25,8 @@ public static class OutlookPage
 
     private const string Style = """
         :root { color: #1a1a1a; background: #ffffff; font: 10pt/1.4 "DejaVu Sans", "Segoe UI", Helvetica, Arial, sans-serif; }
-        body { max-width: 186mm; margin: 0 auto; padding: 6mm; }
+        body { max-width: 250mm; margin: 0 auto; padding: 6mm; }
+        p, ul, figcaption { max-width: 186mm; }
         h1 { font-size: 17pt; margin: 0 0 2mm; }
         h2 { font-size: 13pt; margin: 6mm 0 2mm; border-bottom: 1.5px solid #1a1a1a; }
         h3 { font-size: 11pt; margin: 4mm 0 1mm; }
