@@ -30,18 +30,21 @@ internal sealed class ApiTokenAuthenticationHandler(
     private string? _failure;
 
     /// <summary>Whether a request carries a bearer token (then this scheme, not the cookie, decides).</summary>
-    public static bool HasBearer(HttpRequest request) =>
-        request.Headers.Authorization.ToString().StartsWith(BearerPrefix, StringComparison.OrdinalIgnoreCase);
+    public static bool HasBearer(HttpRequest request) => IsBearer(request.Headers.Authorization.ToString());
+
+    // "Bearer" alone (an empty token, perhaps trimmed on the way) is a bearer attempt too, refused below.
+    private static bool IsBearer(string header) =>
+        header.StartsWith(BearerPrefix, StringComparison.OrdinalIgnoreCase) || header.Equals(BearerPrefix.TrimEnd(), StringComparison.OrdinalIgnoreCase);
 
     protected override async Task<AuthenticateResult> HandleAuthenticateAsync()
     {
         string header = Request.Headers.Authorization.ToString();
-        if (!header.StartsWith(BearerPrefix, StringComparison.OrdinalIgnoreCase))
+        if (!IsBearer(header))
         {
             return AuthenticateResult.NoResult();
         }
 
-        string token = header[BearerPrefix.Length..].Trim();
+        string token = header.Length > BearerPrefix.Length ? header[BearerPrefix.Length..].Trim() : "";
         ApiTokenRecord? record = token.StartsWith(ApiTokens.Prefix, StringComparison.Ordinal) && token.Length < 200
             ? await store.ApiTokens.FindByHashAsync(ApiTokens.Hash(token), Context.RequestAborted)
             : null;
