@@ -109,11 +109,17 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         return (kept, kept.Id != id);
     }
 
+    // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.
+    private readonly JsonSerializerOptions _storedOptions = new(json.Value.SerializerOptions)
+    {
+        UnmappedMemberHandling = System.Text.Json.Serialization.JsonUnmappedMemberHandling.Skip,
+    };
+
     /// <summary>The stored forecast document.</summary>
     public ForecastView Read(ForecastRecord record)
     {
         ArgumentNullException.ThrowIfNull(record);
-        return JsonSerializer.Deserialize<ForecastView>(record.ResultJson, json.Value.SerializerOptions)
+        return JsonSerializer.Deserialize<ForecastView>(record.ResultJson, _storedOptions)
             ?? throw new InvalidOperationException($"Stored forecast {record.Id} is empty.");
     }
 

@@ -59,6 +59,21 @@ internal static class ServiceSetup
             {
                 document.Info.Title = "CanopyAdvisor API";
                 document.Info.Description = "Sites, forecasts, crops and accounts of a CanopyAdvisor service. Errors are ProblemDetails (RFC 9457) with an 'errors' list of {path, detail}.";
+                document.Components ??= new Microsoft.OpenApi.OpenApiComponents();
+                document.Components.SecuritySchemes ??= new Dictionary<string, Microsoft.OpenApi.IOpenApiSecurityScheme>();
+                document.Components.SecuritySchemes["apiToken"] = new Microsoft.OpenApi.OpenApiSecurityScheme
+                {
+                    Type = Microsoft.OpenApi.SecuritySchemeType.Http,
+                    Scheme = "bearer",
+                    Description = "An API token from POST /api/tokens, sent as 'Authorization: Bearer <token>' (RFC 6750).",
+                };
+                document.Components.SecuritySchemes["session"] = new Microsoft.OpenApi.OpenApiSecurityScheme
+                {
+                    Type = Microsoft.OpenApi.SecuritySchemeType.ApiKey,
+                    In = Microsoft.OpenApi.ParameterLocation.Cookie,
+                    Name = AuthenticationSetup.CookieName,
+                    Description = "The sign-in cookie set by POST /api/session.",
+                };
                 return Task.CompletedTask;
             });
         });

@@ -101,4 +101,19 @@ public sealed class ForecastsApiTests(CanopyFactory factory) : IClassFixture<Can
         Assert.Equal("2026-12-02T02:00:00-06:00", forecast.GetProperty("now").GetString());
         Assert.Equal("2026-12-02T08:00:00-06:00", forecast.GetProperty("horizonEnd").GetString());
     }
+
+    [Theory]
+    // Forecasting changes no site data, so every role may run one (server README, permission matrix).
+    [InlineData(Demo.Admin)]
+    [InlineData(Demo.Grower)]
+    [InlineData(Demo.Designer)]
+    [InlineData(Demo.Manager)]
+    public async Task Every_role_may_run_a_forecast(string email)
+    {
+        HttpClient client = await factory.SignedInAsync(email);
+        string siteId = await SiteEditing.SiteIdAsync(client, "demo-indoor-farm");
+        HttpResponseMessage response = await client.PostAsync($"/api/sites/{siteId}/forecasts", SiteEditing.Json(Options.Replace("09:00", "05:00", StringComparison.Ordinal)));
+        Assert.Contains(response.StatusCode, new[] { HttpStatusCode.Created, HttpStatusCode.OK });
+        Assert.Equal(12, (await response.Content.ReadFromJsonAsync<JsonElement>()).GetProperty("benches").GetArrayLength());
+    }
 }

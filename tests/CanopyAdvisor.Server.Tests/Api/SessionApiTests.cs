@@ -77,4 +77,16 @@ public sealed class SessionApiTests(CanopyFactory factory) : IClassFixture<Canop
         HttpClient again = await factory.SignedInAsync("temp.grower@demo.invalid", "a long enough password");
         Assert.Equal("manager", (await again.GetFromJsonAsync<JsonElement>("/api/me")).GetProperty("user").GetProperty("role").GetString());
     }
+
+    [Fact]
+    public async Task Removing_a_user_ends_their_cookie_at_once()
+    {
+        HttpClient admin = await factory.SignedInAsync(Demo.Admin);
+        HttpResponseMessage created = await admin.PostAsJsonAsync("/api/users", new { email = "removed@demo.invalid", displayName = "Removed", role = "lightingDesigner", password = "removed password 1" });
+        string id = (await created.Content.ReadFromJsonAsync<JsonElement>()).GetProperty("id").GetString()!;
+        HttpClient user = await factory.SignedInAsync("removed@demo.invalid", "removed password 1");
+        Assert.Equal(HttpStatusCode.OK, (await user.GetAsync("/api/sites")).StatusCode);
+        Assert.Equal(HttpStatusCode.NoContent, (await admin.DeleteAsync($"/api/users/{id}")).StatusCode);
+        await ProblemAssert.IsProblem(await user.GetAsync("/api/sites"), HttpStatusCode.Unauthorized);
+    }
 }

@@ -45,6 +45,16 @@ public sealed class HostingTests(CanopyFactory factory) : IClassFixture<CanopyFa
     }
 
     [Fact]
+    public async Task The_OpenAPI_document_names_both_ways_to_sign_in()
+    {
+        JsonElement schemes = (await factory.CreateClient().GetFromJsonAsync<JsonElement>("/openapi/v1.json")).GetProperty("components").GetProperty("securitySchemes");
+        // OpenAPI 3.1 §4.8.27: an "http" scheme with "bearer" (RFC 6750), and an "apiKey" in a cookie.
+        Assert.Equal("bearer", schemes.GetProperty("apiToken").GetProperty("scheme").GetString());
+        Assert.Equal("cookie", schemes.GetProperty("session").GetProperty("in").GetString());
+        Assert.Equal("canopy.session", schemes.GetProperty("session").GetProperty("name").GetString());
+    }
+
+    [Fact]
     public async Task Health_answers_without_sign_in()
     {
         HttpResponseMessage response = await factory.CreateClient().GetAsync("/health");
