@@ -7,7 +7,7 @@ namespace CanopyAdvisor.Server.Problems;
 
 /// <summary>The JSON settings of the API, for responses and for reading request bodies.</summary>
 /// <remarks>Strict on input: unknown properties, missing required ones, <c>null</c> where a value is required, numbers
-/// written as strings, and <c>NaN</c>/<c>Infinity</c> are all errors. NodaTime values are ISO-8601 strings (time zones from
+/// written as strings, a property named twice, and <c>NaN</c>/<c>Infinity</c> are all errors. NodaTime values are ISO-8601 strings (time zones from
 /// the IANA database), enums camelCase strings.</remarks>
 internal static class ServerJson
 {
@@ -20,6 +20,7 @@ internal static class ServerJson
         options.RespectNullableAnnotations = true;
         options.RespectRequiredConstructorParameters = true;
         options.NumberHandling = JsonNumberHandling.Strict;
+        options.AllowDuplicateProperties = false;
         options.PropertyNamingPolicy = JsonNamingPolicy.CamelCase;
         options.DefaultIgnoreCondition = JsonIgnoreCondition.Never;
     }

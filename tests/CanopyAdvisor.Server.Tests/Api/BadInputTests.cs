@@ -26,6 +26,8 @@ public sealed class BadInputTests(CanopyFactory factory) : IClassFixture<CanopyF
         { "unknown time zone", DemoWith("\"America/Chicago\"", "\"America/Springfield\""), "timeZone" },
         { "not an object", "[1, 2, 3]", "" },
         { "JSON null", "null", "" },
+        // System.Text.Json reads at most 64 levels by default (JsonReaderOptions.MaxDepth): a nesting bomb is refused, not a stack overflow.
+        { "nesting 10,000 deep", new string('[', 10_000) + new string(']', 10_000), "body:" },
         { "duplicate property", DemoWith("\"elevationM\": 190.0", "\"elevationM\": 190.0, \"elevationM\": 191.0"), "" },
     };
 
@@ -104,6 +106,8 @@ public sealed class BadInputTests(CanopyFactory factory) : IClassFixture<CanopyF
         { "unknown field", """{"name": "x", "scope": "all"}""", "scope" },
         { "null for a required string", """{"name": null}""", "name" },
         { "missing required", """{}""", "body" },
+        // RFC 8259 §4: names within an object SHOULD be unique; the service refuses repeats rather than pick one.
+        { "repeated property", """{"name": "x", "expiresInDays": 1, "expiresInDays": 366}""", "expiresInDays" },
         { "empty body", "", "body" },
         { "array", "[]", "body" },
     };
