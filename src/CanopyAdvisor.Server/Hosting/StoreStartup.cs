@@ -4,7 +4,11 @@ using Microsoft.Extensions.Options;
 namespace CanopyAdvisor.Server.Hosting;
 
 /// <summary>Opens the store on the start-up thread before the server takes requests (so LiteDB's mapper and indexes are
-/// set up once, on one thread), seeds the demo when asked, and prints where the service listens and how to sign in.</summary>
+/// set up once, on one thread), seeds the demo when asked, and prints where the service listens and how to sign in;
+/// on shutdown (Ctrl-C), after the server has stopped taking requests, closes the store.</summary>
+/// <remarks>Hosted services stop in reverse order of start, and the web server starts last, so it has stopped (and let
+/// running requests finish) before <see cref="StopAsync"/> runs. Closing here, not only when the container is disposed,
+/// makes the close happen within the host's stop, which callers (and the tests) await.</remarks>
 internal sealed partial class StoreStartup(
     ICanopyStore store,
     DemoSeeder seeder,
@@ -36,7 +40,15 @@ internal sealed partial class StoreStartup(
         });
     }
 
-    public Task StopAsync(CancellationToken cancellationToken) => Task.CompletedTask;
+    public Task StopAsync(CancellationToken cancellationToken)
+    {
+        store.Dispose();
+        LogClosed(logger, options.Value.StorePath);
+        return Task.CompletedTask;
+    }
+
+    [LoggerMessage(Level = LogLevel.Information, Message = "Closed the store {Path}")]
+    private static partial void LogClosed(ILogger logger, string path);
 
     [LoggerMessage(Level = LogLevel.Information, Message = "Seeded the demo organisation (demo data) into {Path}")]
     private static partial void LogSeeded(ILogger logger, string path);

@@ -6,7 +6,8 @@ namespace CanopyAdvisor.Storage.LiteDb;
 /// <summary>The embedded store: one LiteDB 5 file opened in direct mode by this process alone.</summary>
 /// <remarks>
 /// <para><b>One instance per file.</b> Open it once at start and share it (a singleton); LiteDB's own locks make it
-/// thread-safe inside one process. Never open the same file from a second process or node.</para>
+/// thread-safe inside one process. Never open the same file from a second instance, process or node: direct mode
+/// takes no lock on the file, and two writers corrupt it.</para>
 /// <para><b>Set-up.</b> The constructor builds this store's own <see cref="BsonMapper"/> (NodaTime <see cref="Instant"/>
 /// as 100-ns ticks since the Unix epoch, an Int64, so it round-trips exactly) and ensures every index on the calling
 /// thread, before any request can touch the database.</para>
@@ -20,6 +21,8 @@ namespace CanopyAdvisor.Storage.LiteDb;
 public sealed class LiteDbCanopyStore : ICanopyStore
 {
     private readonly LiteDatabase _db;
+    private readonly Lock _disposeLock = new();
+    private bool _disposed;
 
     /// <summary>Opens (or creates) the store file.</summary>
     /// <param name="path">The database file; its folder must exist.</param>
@@ -104,8 +107,21 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         }));
     }
 
-    /// <summary>Closes the database file.</summary>
-    public void Dispose() => _db.Dispose();
+    /// <summary>Closes the database file (LiteDB writes its log into the data file first). Safe to call more than once
+    /// and from several threads: the service closes the store when it stops and the container disposes it again.</summary>
+    public void Dispose()
+    {
+        lock (_disposeLock)
+        {
+            if (_disposed)
+            {
+                return;
+            }
+
+            _disposed = true;
+            _db.Dispose();
+        }
+    }
 
     /// <summary>Runs a write in one transaction: committed when it returns <see cref="WriteOutcome.Written"/> (or any
     /// non-outcome value), rolled back when it returns another outcome or throws; a duplicate unique key rolls back

@@ -98,9 +98,11 @@ public sealed class ShutdownTests
     {
         string folder;
         string siteId;
+        ICanopyStore hostStore;
         using (var factory = new KeepFolderFactory())
         {
             folder = factory.DataFolder;
+            hostStore = factory.Store;
             HttpClient grower = await factory.SignedInAsync(Demo.Grower);
             siteId = await SiteEditing.SiteIdAsync(grower, "demo-indoor-farm");
             (System.Text.Json.Nodes.JsonObject site, int version) = await SiteEditing.ReadAsync(grower, siteId);
@@ -108,9 +110,13 @@ public sealed class ShutdownTests
             Assert.Equal(HttpStatusCode.OK, (await SiteEditing.ReplaceAsync(grower, siteId, site, version)).StatusCode);
         }
 
+        // The host's store is closed once the factory is disposed.
+        Exception closed = await Record.ExceptionAsync(() => hostStore.Organisations.CountAsync());
+        Assert.IsType<ObjectDisposedException>(closed, exactMatch: false);
         try
         {
-            // LiteDB direct mode holds the file exclusively while open; opening it here proves the host released it.
+            // The host closes the store within its stop (StoreStartup.StopAsync), which disposing the factory awaits;
+            // only then may the file be opened again (direct mode takes no file lock; two open instances corrupt it).
             using var store = new LiteDbCanopyStore(Path.Combine(folder, "canopy.db"));
             UserRecord grower = (await store.Users.FindByEmailAsync(Demo.Grower))!;
             SiteRecord stored = (await store.Sites.GetAsync(grower.OrganisationId, siteId))!;

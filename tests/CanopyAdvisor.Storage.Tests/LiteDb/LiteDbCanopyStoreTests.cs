@@ -172,4 +172,15 @@ public sealed class LiteDbCanopyStoreTests : IDisposable
         Assert.All(outcomes, o => Assert.Equal(WriteOutcome.Written, o));
         Assert.Equal(17, (await _store.Sites.ListAsync("a")).Count);
     }
+
+    [Fact]
+    public async Task Disposing_twice_and_from_several_threads_is_safe_and_ends_use()
+    {
+        await SeedTwoOrganisations();
+        await Task.WhenAll(Enumerable.Range(0, 4).Select(_ => Task.Run(_store.Dispose)));
+        _store.Dispose();
+        await Assert.ThrowsAnyAsync<ObjectDisposedException>(() => _store.Organisations.CountAsync());
+        _store = new LiteDbCanopyStore(_path);
+        Assert.Equal(2, await _store.Organisations.CountAsync());
+    }
 }
