@@ -1,4 +1,5 @@
 using CanopyAdvisor.Server.Hosting;
+using CanopyAdvisor.Storage;
 
 WebApplicationBuilder builder = WebApplication.CreateBuilder(args);
 builder.Configuration.AddCanopySources(args);
@@ -6,7 +7,17 @@ builder.AddCanopyService();
 
 WebApplication app = builder.Build();
 app.UseCanopyService();
-app.Run();
+try
+{
+    app.Run();
+    return 0;
+}
+catch (StoreInUseException e)
+{
+    // One service per data folder: say so plainly instead of a stack trace.
+    Console.Error.WriteLine($"canopy server: {e.Message}");
+    return 2;
+}
 
 /// <summary>The service's entry point (declared so the tests can host it with WebApplicationFactory).</summary>
 public partial class Program;

@@ -6,8 +6,10 @@ namespace CanopyAdvisor.Storage.LiteDb;
 /// <summary>The embedded store: one LiteDB 5 file opened in direct mode by this process alone.</summary>
 /// <remarks>
 /// <para><b>One instance per file.</b> Open it once at start and share it (a singleton); LiteDB's own locks make it
-/// thread-safe inside one process. Never open the same file from a second instance, process or node: direct mode
-/// takes no lock on the file, and two writers corrupt it.</para>
+/// thread-safe inside one process. LiteDB's direct mode does not stop a second instance from opening the file (seen on
+/// Linux), and two instances corrupt it, so this class holds an exclusive lock on <c>&lt;file&gt;.lock</c> while open: a
+/// second instance, in this process or another on the same machine, fails with <see cref="StoreInUseException"/>. Never
+/// put the file on a network share for several nodes (file locks there are not to be trusted).</para>
 /// <para><b>Set-up.</b> The constructor builds this store's own <see cref="BsonMapper"/> (NodaTime <see cref="Instant"/>
 /// as 100-ns ticks since the Unix epoch, an Int64, so it round-trips exactly) and ensures every index on the calling
 /// thread, before any request can touch the database.</para>
@@ -20,21 +22,44 @@ namespace CanopyAdvisor.Storage.LiteDb;
 /// </remarks>
 public sealed class LiteDbCanopyStore : ICanopyStore
 {
+    private readonly FileStream _lockFile;
     private readonly LiteDatabase _db;
     private readonly Lock _disposeLock = new();
     private bool _disposed;
 
     /// <summary>Opens (or creates) the store file.</summary>
     /// <param name="path">The database file; its folder must exist.</param>
+    /// <exception cref="StoreInUseException">Another instance, in this or another process, has the file open.</exception>
     public LiteDbCanopyStore(string path)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
+        // Direct mode does not stop a second instance from opening the file, and two instances corrupt it: hold an
+        // exclusive lock on a file beside it for as long as this instance is open (released by Dispose or process exit).
+        string lockPath = path + ".lock";
+        try
+        {
+            _lockFile = new FileStream(lockPath, FileMode.OpenOrCreate, FileAccess.ReadWrite, FileShare.None);
+        }
+        catch (IOException e)
+        {
+            throw new StoreInUseException($"The store {path} is already open in another instance or process (lock {lockPath}); run one service per data folder.", e);
+        }
+
         var connection = new ConnectionString
         {
             Filename = path,
             Connection = ConnectionType.Direct,
         };
-        _db = new LiteDatabase(connection, CreateMapper());
+        try
+        {
+            _db = new LiteDatabase(connection, CreateMapper());
+        }
+        catch
+        {
+            _lockFile.Dispose();
+            throw;
+        }
+
         OrganisationCollection = _db.GetCollection<OrganisationDocument>("organisations");
         UserCollection = _db.GetCollection<UserDocument>("users");
         TokenCollection = _db.GetCollection<ApiTokenDocument>("apiTokens");
@@ -120,6 +145,7 @@ public sealed class LiteDbCanopyStore : ICanopyStore
 
             _disposed = true;
             _db.Dispose();
+            _lockFile.Dispose();
         }
     }
 

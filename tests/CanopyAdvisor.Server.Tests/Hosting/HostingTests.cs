@@ -116,7 +116,7 @@ public sealed class ShutdownTests
         try
         {
             // The host closes the store within its stop (StoreStartup.StopAsync), which disposing the factory awaits;
-            // only then may the file be opened again (direct mode takes no file lock; two open instances corrupt it).
+            // only then may the file be opened again (direct mode does not stop a second instance from opening it; two open instances corrupt it).
             using var store = new LiteDbCanopyStore(Path.Combine(folder, "canopy.db"));
             UserRecord grower = (await store.Users.FindByEmailAsync(Demo.Grower))!;
             SiteRecord stored = (await store.Sites.GetAsync(grower.OrganisationId, siteId))!;

@@ -54,6 +54,26 @@ public sealed partial class ServerProcessTests : IDisposable
             HttpResponseMessage signedIn = await client.PostAsJsonAsync("/api/session", new { email = Demo.Admin, password = CanopyFactory.DemoPassword }, guard.Token);
             Assert.Equal(HttpStatusCode.OK, signedIn.StatusCode);
 
+            // A second service on the same data folder is refused (two LiteDB instances would corrupt the file).
+            var second = new ProcessStartInfo("dotnet", ["exec", dll, "--port", "0", "--data", _folder])
+            {
+                RedirectStandardOutput = true,
+                RedirectStandardError = true,
+                UseShellExecute = false,
+                WorkingDirectory = AppContext.BaseDirectory,
+            };
+            using (Process refused = Process.Start(second)!)
+            {
+                Task<string> refusedOut = refused.StandardOutput.ReadToEndAsync(guard.Token);
+                string refusedError = await refused.StandardError.ReadToEndAsync(guard.Token);
+                await refused.WaitForExitAsync(guard.Token);
+                await refusedOut;
+                Assert.Equal(2, refused.ExitCode);
+                Assert.Contains("already open in another instance or process", refusedError, StringComparison.Ordinal);
+            }
+
+            Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health", guard.Token)).StatusCode);
+
             // SIGINT is what Ctrl-C sends to the foreground process (POSIX.1-2017, General Terminal Interface §11.1.9).
             using (Process signal = Process.Start("kill", ["-INT", process.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)]))
             {

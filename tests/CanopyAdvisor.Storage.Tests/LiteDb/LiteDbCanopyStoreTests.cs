@@ -183,4 +183,16 @@ public sealed class LiteDbCanopyStoreTests : IDisposable
         _store = new LiteDbCanopyStore(_path);
         Assert.Equal(2, await _store.Organisations.CountAsync());
     }
+
+    [Fact]
+    public async Task A_second_instance_on_the_same_file_is_refused_until_the_first_is_closed()
+    {
+        await SeedTwoOrganisations();
+        // LiteDB direct mode alone would let it open (and two instances corrupt the file): the store's lock refuses it.
+        Assert.Throws<StoreInUseException>(() => new LiteDbCanopyStore(_path).Dispose());
+        Assert.Equal(2, await _store.Organisations.CountAsync());
+        _store.Dispose();
+        _store = new LiteDbCanopyStore(_path);
+        Assert.Equal(2, await _store.Organisations.CountAsync());
+    }
 }
