@@ -111,16 +111,16 @@ internal static class SitesApi
 
         string json = await RequestBody.ReadJsonTextAsync(context);
         JsonObject submitted = ReadObject(json);
-        if (TryParseObject(current.Json) is { } stored)
+        // Fail closed: a stored site that does not read as an object (never written so) is an error, not a free pass.
+        JsonObject stored = TryParseObject(current.Json)
+            ?? throw new InvalidOperationException($"Stored site {current.Id} is not a JSON object.");
+        List<ProblemError> denied = ChangedSections(stored, submitted)
+            .Where(section => !SitePermissions.MayChange(caller.Role, section))
+            .Select(section => new ProblemError(section, $"your role ({RoleNames.Of(caller.Role)}) may not change this section"))
+            .ToList();
+        if (denied.Count > 0)
         {
-            List<ProblemError> denied = ChangedSections(stored, submitted)
-                .Where(section => !SitePermissions.MayChange(caller.Role, section))
-                .Select(section => new ProblemError(section, $"your role ({RoleNames.Of(caller.Role)}) may not change this section"))
-                .ToList();
-            if (denied.Count > 0)
-            {
-                return ApiProblems.Forbidden($"your role may change: {SitePermissions.Describe(caller.Role)}", denied);
-            }
+            return ApiProblems.Forbidden($"your role may change: {SitePermissions.Describe(caller.Role)}", denied);
         }
 
         Site site = Read(json);

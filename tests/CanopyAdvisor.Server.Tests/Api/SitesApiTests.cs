@@ -190,4 +190,25 @@ public sealed class SitesApiTests(CanopyFactory factory) : IClassFixture<CanopyF
         await ProblemAssert.IsInvalid(await SiteEditing.ReplaceAsync(designer, siteId, site), $"lampTypes.{typeName}.beam");
         Assert.Equal(version, (await SiteEditing.ReadAsync(designer, siteId)).Version);
     }
+
+    [Fact]
+    public async Task Numbers_written_another_way_are_not_a_change()
+    {
+        HttpClient grower = await factory.SignedInAsync(Demo.Grower);
+        string siteId = await SiteEditing.SiteIdAsync(grower, Indoor);
+        (JsonObject site, int version) = await SiteEditing.ReadAsync(grower, siteId);
+        Edit(site, "lots");
+        // RFC 8259 §6 numbers: 190.0, 190 and 1.9e2 are one value; a client that writes them differently (JavaScript
+        // prints 190.0 as 190) has not changed the location section, which a grower may not change.
+        double elevation = site["location"]!["elevationM"]!.GetValue<double>();
+        string text = site.ToJsonString().Replace(
+            $"\"elevationM\":{site["location"]!["elevationM"]!.ToJsonString()}",
+            $"\"elevationM\":{elevation:0.###}e0",
+            StringComparison.Ordinal);
+        Assert.Contains("e0", text, StringComparison.Ordinal);
+        using var request = new HttpRequestMessage(HttpMethod.Put, $"/api/sites/{siteId}") { Content = SiteEditing.Json(text) };
+        HttpResponseMessage response = await grower.SendAsync(request);
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
+        Assert.Equal(version + 1, (await SiteEditing.ReadAsync(grower, siteId)).Version);
+    }
 }
