@@ -68,6 +68,11 @@ public sealed class BadInputTests(CanopyFactory factory) : IClassFixture<CanopyF
         request.Headers.TransferEncodingChunked = true;
         await ProblemAssert.IsProblem(await admin.SendAsync(request), HttpStatusCode.RequestEntityTooLarge);
         Assert.Equal(before, await SiteCountAsync(admin));
+
+        // The same limit for every JSON body, here a token request padded with spaces.
+        string paddedToken = "{\"name\": \"x\"" + new string(' ', 300_000) + "}";
+        await ProblemAssert.IsProblem(await admin.PostAsync("/api/tokens", SiteEditing.Json(paddedToken)), HttpStatusCode.RequestEntityTooLarge);
+        Assert.Empty(await admin.GetFromJsonAsync<List<JsonElement>>("/api/tokens") ?? []);
     }
 
     [Theory]

@@ -88,6 +88,8 @@ public sealed class ForecastsApiTests(CanopyFactory factory) : IClassFixture<Can
         HttpResponseMessage created = await admin.PostAsync("/api/sites", SiteEditing.Json(bare.ToJsonString()));
         string siteId = (await created.Content.ReadFromJsonAsync<JsonElement>()).GetProperty("id").GetString()!;
         await ProblemAssert.IsInvalid(await admin.PostAsync($"/api/sites/{siteId}/forecasts", SiteEditing.Json(Options)), "lots");
+        // The options body may be left out altogether (every member has a default): the same answer, not "body required".
+        await ProblemAssert.IsInvalid(await admin.PostAsync($"/api/sites/{siteId}/forecasts", null), "lots");
     }
 
     [Fact]
