@@ -1,0 +1,178 @@
+using System.Globalization;
+using System.Security.Cryptography;
+using System.Text;
+using System.Text.Json;
+using CanopyAdvisor.Core.Forecast;
+using CanopyAdvisor.Core.Plants;
+using CanopyAdvisor.Core.Plants.Growth;
+using CanopyAdvisor.Core.Sites;
+using CanopyAdvisor.Core.Sky;
+using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Sites;
+using CanopyAdvisor.Server.Accounts;
+using CanopyAdvisor.Server.Contracts;
+using CanopyAdvisor.Storage;
+using Microsoft.Extensions.Options;
+using NodaTime;
+using NodaTime.Text;
+
+namespace CanopyAdvisor.Server.Forecasting;
+
+/// <summary>Runs a site's bench forecast as the <c>canopy forecast</c> command does (clear sky × the site's clearness,
+/// the site's temperature setpoints, <see cref="ForecastSession"/>), keyed by the hash of its inputs so a repeat is
+/// served from the store.</summary>
+/// <remarks>The inputs hashed: the stored site file text, the crop library version (<see cref="CropCatalogue.Version"/>),
+/// the model build (the module version id of CanopyAdvisor.Core, which deterministic builds derive from its content),
+/// the start instant, the horizon and whether the band is included. Nothing else feeds the forecast.</remarks>
+internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IClock clock, IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions> json)
+{
+    /// <summary>The default horizon, days.</summary>
+    public const double DefaultDays = 7;
+
+    private static readonly OffsetDateTimePattern NowPattern =
+        OffsetDateTimePattern.CreateWithInvariantCulture("uuuu'-'MM'-'dd'T'HH':'mm':'ss;FFFFFFFFFo<G>");
+
+    private static readonly string ModelBuild = typeof(BenchForecaster).Assembly.ManifestModule.ModuleVersionId.ToString("N");
+
+    /// <summary>The forecast of a site for these options: the stored one when the inputs match one, else computed and stored.</summary>
+    /// <returns>The stored record and whether it was already there.</returns>
+    /// <exception cref="InvalidInputException">Bad options, or the site cannot be forecast (no lots, unknown crops); every problem.</exception>
+    public async Task<(ForecastRecord Record, bool FromStore)> GetOrRunAsync(SiteRecord site, ForecastOptions options, Caller caller, CancellationToken cancellationToken)
+    {
+        var errors = new List<ValidationError>();
+        Instant now = clock.GetCurrentInstant();
+        now = Instant.FromUnixTimeTicks(now.ToUnixTimeTicks() - (now.ToUnixTimeTicks() % NodaConstants.TicksPerHour));
+        if (options.Now is not null)
+        {
+            ParseResult<OffsetDateTime> parsed = NowPattern.Parse(options.Now);
+            if (parsed.Success)
+            {
+                now = parsed.Value.ToInstant();
+            }
+            else
+            {
+                errors.Add(new ValidationError("now", "must be an ISO-8601 date and time with an offset, e.g. 2026-12-02T09:00:00+01:00"));
+            }
+        }
+
+        double days = options.Days ?? DefaultDays;
+        if (!(days > 0 && days <= 366))
+        {
+            errors.Add(new ValidationError("days", "must be more than 0 and at most 366"));
+        }
+
+        if (errors.Count > 0)
+        {
+            throw new InvalidInputException(errors);
+        }
+
+        bool band = options.IncludeBand ?? true;
+        string hash = HashInputs(site.Json, crops.Version, now, days, band);
+        if (await store.Forecasts.FindByHashAsync(site.OrganisationId, site.Id, hash, cancellationToken) is { } stored)
+        {
+            return (stored, true);
+        }
+
+        Site model = new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null);
+        if (model.Lots.IsDefaultOrEmpty)
+        {
+            throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
+        }
+
+        var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
+        foreach (Lot lot in model.Lots)
+        {
+            if (crops.Library.TryGet(lot.CropId, out Crop? crop))
+            {
+                cropsById[lot.CropId] = crop;
+            }
+        }
+
+        var request = new ForecastRequest(
+            model,
+            cropsById,
+            new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather),
+            new SetpointTemperature(model.Temperatures, model.Location, model.Zone),
+            now)
+        {
+            Horizon = Duration.FromHours(days * 24),
+            IncludeUncertainty = band,
+        };
+
+        // Validation inside Prepare throws InvalidInputException (unknown crops, lots on unknown benches): a 400, nothing stored.
+        SiteForecast forecast = await Task.Run(() => ForecastSession.Prepare(request).Run(cancellationToken: cancellationToken), cancellationToken);
+        string id = ApiTokens.NewId("fc");
+        Instant createdAt = clock.GetCurrentInstant();
+        ForecastView view = ToView(id, site, hash, createdAt, caller.UserId, model, forecast, band);
+        var record = new ForecastRecord(id, site.OrganisationId, site.Id, site.Version, hash, createdAt, caller.UserId, JsonSerializer.Serialize(view, json.Value.SerializerOptions));
+        ForecastRecord kept = await store.Forecasts.AddAsync(record, cancellationToken);
+        return (kept, kept.Id != id);
+    }
+
+    // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.
+    private readonly JsonSerializerOptions _storedOptions = new(json.Value.SerializerOptions)
+    {
+        UnmappedMemberHandling = System.Text.Json.Serialization.JsonUnmappedMemberHandling.Skip,
+    };
+
+    /// <summary>The stored forecast document.</summary>
+    public ForecastView Read(ForecastRecord record)
+    {
+        ArgumentNullException.ThrowIfNull(record);
+        return JsonSerializer.Deserialize<ForecastView>(record.ResultJson, _storedOptions)
+            ?? throw new InvalidOperationException($"Stored forecast {record.Id} is empty.");
+    }
+
+    /// <summary>Lower-case hex SHA-256 of the forecast's inputs, each on its own labelled line.</summary>
+    public static string HashInputs(string siteJson, string cropLibraryVersion, Instant now, double days, bool band)
+    {
+        ArgumentNullException.ThrowIfNull(siteJson);
+        var text = new StringBuilder();
+        text.Append("canopy-forecast-inputs 1\n");
+        text.Append("model ").Append(ModelBuild).Append('\n');
+        text.Append("crops ").Append(cropLibraryVersion).Append('\n');
+        text.Append("now ").Append(InstantPattern.ExtendedIso.Format(now)).Append('\n');
+        text.Append("days ").Append(days.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
+        text.Append("band ").Append(band ? "yes" : "no").Append('\n');
+        text.Append("site ").Append(siteJson.Length.ToString(CultureInfo.InvariantCulture)).Append('\n').Append(siteJson);
+        return Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text.ToString())));
+    }
+
+    private static ForecastView ToView(string id, SiteRecord site, string hash, Instant createdAt, string userId, Site model, SiteForecast forecast, bool band)
+    {
+        OffsetDateTime Local(Instant t) => t.InZone(model.Zone).ToOffsetDateTime();
+        var benches = forecast.Benches.Select(b => new BenchForecastView(
+            b.BenchId,
+            b.LotId,
+            b.CropId,
+            R(b.LeanNow.Tilt.Degrees, 2),
+            R(b.LeanNow.Azimuth.Degrees, 1),
+            b.LeanNow.CompassPoint,
+            R(b.WorstLeanNow.Tilt.Degrees, 2),
+            R(b.LeanRateDegreesPerDay, 3),
+            R(b.LeanAtHorizon.Tilt.Degrees, 2),
+            R(b.LeanAtHorizon.Azimuth.Degrees, 1),
+            R(b.LeanGradeLimit.Degrees, 1),
+            b.LeavesGradeAt is Instant at ? Local(at) : null,
+            R(b.HeightNowMm, 1),
+            R(b.HeightAtHorizonMm, 1),
+            R(b.HeightAtSaleMm, 1),
+            R(b.HeightGradeLimitMm, 0),
+            R(b.MeanDliMolPerM2Day, 2),
+            R(b.MeanPhytochromeState, 3),
+            R(b.MeanDifKelvin, 2),
+            b.Uncertainty is LeanUncertainty u
+                ? new LeanBandView(R(u.Low.Degrees, 2), R(u.High.Degrees, 2), [.. u.Drivers.Select(d => d.Key)])
+                : null,
+            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))]))
+            .ToList();
+        string daylight = model.Structure is IndoorRoom
+            ? "none (indoor room)"
+            : string.Create(CultureInfo.InvariantCulture, $"clear sky (Ineichen–Perez, Linke turbidity {model.Weather.LinkeTurbidity}) × daily clearness {model.Weather.DailyClearness}");
+        return new ForecastView(
+            id, site.Id, site.Version, hash, createdAt, userId, model.Zone.Id, Local(forecast.Now), Local(forecast.HorizonEnd),
+            forecast.Step.TotalMinutes, band, daylight, forecast.MissingLightSteps, forecast.MissingTemperatureSteps, benches);
+    }
+
+    private static double R(double value, int decimals) => Math.Round(value, decimals);
+}
