@@ -23,6 +23,9 @@ function el(tag, attrs = {}, ...children) {
   return node;
 }
 const fmt = (value, digits) => (value === null || value === undefined || Number.isNaN(value)) ? "–" : Number(value).toFixed(digits);
+// The nearest of 16 compass points to a bearing in degrees clockwise from north.
+const COMPASS = ["N", "NNE", "NE", "ENE", "E", "ESE", "SE", "SSE", "S", "SSW", "SW", "WSW", "W", "WNW", "NW", "NNW"];
+const compass = deg => COMPASS[Math.round((((deg % 360) + 360) % 360) / 22.5) % 16];
 const say = text => { statusLine.textContent = text; };
 function localTime(text) {
   // Offset date-times from the API ("2026-12-02T09:00:00+01"): shown as the site's own local time.
@@ -168,7 +171,7 @@ function show(title, ...content) {
 function showWho() {
   const who = document.getElementById("who");
   who.hidden = !me;
-  if (me) document.getElementById("who-name").textContent = `${me.user.name} (${me.user.role}) · ${me.organisationName}`;
+  if (me) document.getElementById("who-name").textContent = `${me.user.displayName} (${me.user.role}) · ${me.organisationName}`;
 }
 
 document.addEventListener("click", event => {
@@ -302,14 +305,14 @@ async function drawForecast(siteId, region, forecast) {
     el("td", { text: b.cropId }),
     el("td", { class: "num", text: fmt(b.leanDeg, 1) }),
     el("td", { class: "num", text: fmt(b.leanAtHorizonDeg, 1) }),
-    el("td", { text: `${b.leanDirection} (${fmt(b.leanAtHorizonAzimuthDeg, 0)}°)` }),
+    el("td", { text: `${compass(b.leanAtHorizonAzimuthDeg)} (${fmt(b.leanAtHorizonAzimuthDeg, 0)}°)` }),
     el("td", { class: "num", text: fmt(b.leanRateDegPerDay, 2) }),
     el("td", { class: "num", text: fmt(b.leanGradeLimitDeg, 0) }),
     el("td", {}, flagsCell(b.flags))));
   const table = el("table", {},
     el("caption", { text: `Benches, from ${localTime(forecast.now)} to ${localTime(forecast.horizonEnd)} (${forecast.timeZone})` }),
     el("thead", {}, el("tr", {},
-      ["Bench", "Crop", "Lean now (°)", "Lean at horizon (°)", "Direction now (at horizon)", "Rate (°/day)", "Grade limit (°)", "Flags"]
+      ["Bench", "Crop", "Lean now (°)", "Lean at horizon (°)", "Direction at horizon", "Rate (°/day)", "Grade limit (°)", "Flags"]
         .map((t, i) => el("th", { scope: "col", class: i >= 2 && i <= 6 && i !== 4 ? "num" : null, text: t })))),
     el("tbody", {}, rows));
   region.replaceChildren(heading,
@@ -344,8 +347,8 @@ async function benchPage(siteId, benchId) {
     el("p", { class: "lede", text: `Lot ${bench.lotId} of ${bench.cropId}. Forecast from ${localTime(forecast.now)} to ${localTime(forecast.horizonEnd)} (${forecast.timeZone}).` }),
     el("dl", { class: "facts" },
       fact("Lean now", `${fmt(bench.leanDeg, 1)}° toward ${bench.leanDirection}`),
-      fact("Lean at the horizon", `${fmt(bench.leanAtHorizonDeg, 1)}° toward ${fmt(bench.leanAtHorizonAzimuthDeg, 0)}°`),
-      fact("Direction now", `${bench.leanDirection} (${fmt(bench.leanAzimuthDeg, 0)}° from north)`),
+      fact("Lean at the horizon", `${fmt(bench.leanAtHorizonDeg, 1)}° toward ${compass(bench.leanAtHorizonAzimuthDeg)}`),
+      fact("Direction now → horizon", `${fmt(bench.leanAzimuthDeg, 0)}° → ${fmt(bench.leanAtHorizonAzimuthDeg, 0)}° from north`),
       fact("Lean rate", `${fmt(bench.leanRateDegPerDay, 2)}° per day`),
       fact("Worst plant now", `${fmt(bench.worstLeanDeg, 1)}°`),
       fact("Grade limit", `${fmt(bench.leanGradeLimitDeg, 0)}°`),
