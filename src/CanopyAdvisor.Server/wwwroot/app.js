@@ -332,11 +332,15 @@ async function drawForecast(siteId, region, forecast) {
 }
 
 async function benchPage(siteId, benchId) {
-  const forecast = await latestForecast(siteId);
+  const [site, forecast] = await Promise.all([api("GET", `/api/sites/${encodeURIComponent(siteId)}`), latestForecast(siteId)]);
   const back = el("p", {}, el("a", { href: `/sites/${encodeURIComponent(siteId)}`, "data-link": true, text: "← Back to the site" }));
+  const lotIndex = (site.site.lots || []).findIndex(l => l.benchId === benchId);
+  const lotSection = lotIndex >= 0
+    ? [el("h2", { id: "lot-title", text: "Crop lot on this bench" }), lotForm(siteId, lotIndex, site.site.lots[lotIndex])]
+    : [el("h2", { text: "Crop lot on this bench" }), el("p", { class: "none", text: "No crop lot on this bench." })];
   const bench = forecast?.benches.find(b => b.benchId === benchId);
   if (!bench) {
-    show(`Bench ${benchId}`, back, el("p", { class: "none", text: "This bench has no forecast yet: run one from the site page (a bench needs a crop lot)." }));
+    show(`Bench ${benchId}`, back, el("p", { class: "none", text: "This bench has no forecast yet: run one from the site page (a bench needs a crop lot)." }), ...lotSection);
     return;
   }
   const fact = (label, value) => el("div", {}, el("dt", { text: label }), el("dd", { text: value }));
@@ -362,7 +366,72 @@ async function benchPage(siteId, benchId) {
     el("h2", { text: "Flags" }),
     el("p", {}, flagsCell(bench.flags)),
     el("h2", { id: "track-title", text: "Lean track" }),
-    leanChart(bench));
+    leanChart(bench),
+    ...lotSection);
+}
+
+// Edits the measured and planned figures of a bench's lot: the site file is read, the lot changed and the whole file
+// sent back with If-Match (the service refuses a replace over someone else's change, and checks who may change lots).
+function lotForm(siteId, index, lot) {
+  const path = name => `lots[${index}].${name}`;
+  const inputs = {
+    heightMm: el("input", { type: "number", step: "any", inputmode: "decimal", name: "heightMm", "data-path": path("heightMm"), value: lot.heightMm ?? "" }),
+    measuredOn: el("input", { type: "date", name: "measuredOn", "data-path": path("measuredOn"), value: lot.measuredOn ?? "" }),
+    saleOn: el("input", { type: "date", name: "saleOn", "data-path": path("saleOn"), value: lot.saleOn ?? "" }),
+    spacingM: el("input", { type: "number", step: "any", inputmode: "decimal", name: "spacingM", "data-path": path("spacingM"), value: lot.spacingM ?? "" }),
+    pots: el("input", { type: "number", step: "1", inputmode: "numeric", name: "pots", "data-path": path("pots"), value: lot.pots ?? "" }),
+  };
+  const button = el("button", { type: "submit", text: "Save the lot" });
+  const saved = el("p", { class: "meta", role: "status" });
+  const form = formShell({ class: "panel", "aria-labelledby": "lot-title" },
+    el("p", { class: "meta", text: `Lot ${lot.id} of ${lot.crop}, planted ${lot.plantedOn}.` }),
+    el("div", { class: "inline-form" },
+      field("lot-height", "Measured height (mm)", inputs.heightMm, "Mean height of sample plants."),
+      field("lot-measured", "Measured on", inputs.measuredOn),
+      field("lot-sale", "Sale date", inputs.saleOn),
+      field("lot-spacing", "Spacing (m)", inputs.spacingM),
+      field("lot-pots", "Pots", inputs.pots),
+      el("div", { class: "actions" }, button)),
+    saved);
+  const value = (input, numeric) => {
+    const text = input.value.trim();
+    if (text === "") return undefined;
+    if (!numeric) return text;
+    const n = Number(text);
+    return Number.isNaN(n) ? text : n;
+  };
+  form.addEventListener("submit", async event => {
+    event.preventDefault();
+    clearErrors(form);
+    saved.textContent = "";
+    button.disabled = true;
+    try {
+      const response = await fetch(`/api/sites/${encodeURIComponent(siteId)}`, { credentials: "same-origin", headers: { Accept: "application/json" } });
+      if (!response.ok) throw new ApiError(response.status, await response.json());
+      const current = await response.json();
+      const file = current.site;
+      const target = file.lots?.[index];
+      if (!target || target.id !== lot.id) throw new ApiError(409, { title: "The site has changed", detail: "this lot moved or was removed; reload the page" });
+      for (const [name, input] of Object.entries(inputs)) {
+        const v = value(input, input.type === "number");
+        if (v === undefined) delete target[name]; else target[name] = v;
+      }
+      const put = await fetch(`/api/sites/${encodeURIComponent(siteId)}`, {
+        method: "PUT",
+        credentials: "same-origin",
+        headers: { "Content-Type": "application/json", Accept: "application/json", "If-Match": `"${current.summary.version}"` },
+        body: JSON.stringify(file),
+      });
+      const answer = await put.json();
+      if (!put.ok) throw new ApiError(put.status, answer);
+      saved.textContent = `Saved: site version ${answer.version}. Run the forecast again on the site page to see the change.`;
+    } catch (error) {
+      showProblem(form, error);
+    } finally {
+      button.disabled = false;
+    }
+  });
+  return form;
 }
 
 // The lean track as a line chart: time across, lean up, the grade limit as a dashed line labelled in words.
