@@ -52,6 +52,19 @@ public sealed partial class PagesTests(BrowserFixture fixture)
     }
 
     [Fact]
+    public async Task Signing_out_ends_the_session()
+    {
+        IPage page = await SignedInAsync();
+        await page.GetByRole(AriaRole.Button, new() { Name = "Sign out" }).ClickAsync();
+        await Assertions.Expect(page.GetByRole(AriaRole.Heading, new() { Name = "Sign in", Level = 1 })).ToBeVisibleAsync();
+
+        // The cookie is gone: a site address asks for a sign-in again and remembers where to go after it.
+        await page.GotoAsync("/sites");
+        await Assertions.Expect(page.GetByRole(AriaRole.Heading, new() { Name = "Sign in", Level = 1 })).ToBeVisibleAsync();
+        await Assertions.Expect(page).ToHaveURLAsync(new Regex(@"/sign-in\?next=%2Fsites$"));
+    }
+
+    [Fact]
     public async Task A_wrong_password_is_said_on_the_form()
     {
         IPage page = await fixture.NewPageAsync();
@@ -210,6 +223,9 @@ public sealed partial class PagesTests(BrowserFixture fixture)
         await page.GetByLabel("Include the band over the crop parameters").UncheckAsync();
         await page.GetByRole(AriaRole.Button, new() { Name = "Run the forecast" }).ClickAsync();
         await Assertions.Expect(page.Locator("figure.map svg")).ToBeVisibleAsync(Computation);
+        // The busy indicator is gone and the status line says the forecast is ready (a polite live region).
+        await Assertions.Expect(page.Locator(".busy")).ToHaveCountAsync(0);
+        await Assertions.Expect(page.GetByRole(AriaRole.Status).Filter(new() { HasTextString = "Forecast ready" })).ToHaveTextAsync(new Regex(@"^Forecast ready: \d+ benches\.$"));
     }
 
     private static async Task Screenshot(IPage page, string name) =>
