@@ -8,6 +8,15 @@ if ! command -v dotnet >/dev/null 2>&1; then
   echo "The .NET 10 SDK is required (dotnet on PATH)." >&2
   exit 1
 fi
+# The browser tests (tests/CanopyAdvisor.Browser.Tests) drive Debian's Chromium through Playwright, which cannot download
+# its own browsers here: install the distribution's `chromium` package when /usr/bin/chromium is missing (CI runs as
+# root; quiet and non-interactive).
+if [ ! -x /usr/bin/chromium ]; then
+  echo "Installing Debian's chromium for the browser tests..."
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get update -qq
+  apt-get install -y -qq chromium >/dev/null
+fi
 log=$(mktemp)
 trap 'rm -f "$log"' EXIT
 dotnet restore CanopyAdvisor.sln

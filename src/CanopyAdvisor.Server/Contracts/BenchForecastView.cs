@@ -24,6 +24,10 @@ namespace CanopyAdvisor.Server.Contracts;
 /// <param name="DifK">Mean DIF over the horizon, K.</param>
 /// <param name="LeanAtHorizonBand">The band over the parameter ranges, or null when not asked for.</param>
 /// <param name="Flags">Leggy and leaning flags.</param>
+/// <param name="LeanTrack">The bench lean every hour from now to the horizon end, for charts; null in forecasts stored
+/// before it was kept.</param>
+/// <param name="PointLeansAtHorizonDeg">Each sample point's lean at the horizon end, degrees, in the bench's grid order
+/// (along the length first), for the lean map; null in forecasts stored before it was kept.</param>
 public sealed record BenchForecastView(
     string BenchId,
     string LotId,
@@ -45,4 +49,6 @@ public sealed record BenchForecastView(
     double PhytochromeState,
     double DifK,
     LeanBandView? LeanAtHorizonBand,
-    IReadOnlyList<FlagView> Flags);
+    IReadOnlyList<FlagView> Flags,
+    IReadOnlyList<LeanTrackPointView>? LeanTrack = null,
+    IReadOnlyList<double>? PointLeansAtHorizonDeg = null);

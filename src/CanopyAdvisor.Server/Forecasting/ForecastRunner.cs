@@ -164,7 +164,9 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             b.Uncertainty is LeanUncertainty u
                 ? new LeanBandView(R(u.Low.Degrees, 2), R(u.High.Degrees, 2), [.. u.Drivers.Select(d => d.Key)])
                 : null,
-            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))]))
+            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))],
+            [.. b.LeanTrack.Where(s => s.At >= forecast.Now).Select(s => new LeanTrackPointView(Local(s.At), R(s.Tilt.Degrees, 2), R(s.Azimuth.Degrees, 1)))],
+            [.. b.PointLeansAtHorizon.Select(l => R(l.Tilt.Degrees, 2))]))
             .ToList();
         string daylight = model.Structure is IndoorRoom
             ? "none (indoor room)"

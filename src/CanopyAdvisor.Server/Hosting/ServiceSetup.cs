@@ -86,6 +86,7 @@ internal static class ServiceSetup
     {
         app.UseExceptionHandler();
         app.UseStatusCodePages();
+        app.UseWebPages();
         app.UseRouting();
         app.UseAuthentication();
         app.UseRateLimiter();
@@ -99,6 +100,8 @@ internal static class ServiceSetup
         app.MapSitesApi();
         app.MapForecastsApi();
         app.MapCropsApi();
+        app.MapMapsApi();
+        app.MapWebPages();
         return app;
     }
 }
