@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # The project's one test command (README "Run the tests"). It installs what the tests need, then runs them all.
-# Today the tests need only the .NET SDK and NuGet packages (restored below); the sun-position reference table in
-# tests/reference/ is committed, so PyEphem is needed only to regenerate it (DEVELOPERS.md).
+# The tests need the .NET SDK, NuGet packages (restored below) and Debian's Chromium for the browser tests (installed
+# below when missing); the sun-position reference table in tests/reference/ is committed, so PyEphem is needed only to
+# regenerate it (DEVELOPERS.md).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 if ! command -v dotnet >/dev/null 2>&1; then
