@@ -13,6 +13,7 @@ namespace CanopyAdvisor.Storage;
 /// <param name="Outcome">How it ended (the service's word, e.g. <c>succeeded</c>, <c>failed</c>).</param>
 /// <param name="Message">A short account for people (what was stored, or what went wrong).</param>
 /// <param name="CaughtUp">True when the run was made on start for a fire time missed while the service was down.</param>
+/// <param name="Output">What the run produced, as the service stores it (a JSON document), or null.</param>
 public sealed record JobRunRecord(
     string Id,
     string OrganisationId,
@@ -23,4 +24,5 @@ public sealed record JobRunRecord(
     Instant FinishedAt,
     string Outcome,
     string Message,
-    bool CaughtUp);
+    bool CaughtUp,
+    string? Output = null);

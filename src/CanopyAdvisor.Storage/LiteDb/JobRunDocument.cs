@@ -28,6 +28,8 @@ internal sealed class JobRunDocument
 
     public bool CaughtUp { get; set; }
 
+    public string? Output { get; set; }
+
     public static JobRunDocument From(JobRunRecord r) => new()
     {
         Id = r.Id,
@@ -41,7 +43,8 @@ internal sealed class JobRunDocument
         Outcome = r.Outcome,
         Message = r.Message,
         CaughtUp = r.CaughtUp,
+        Output = r.Output,
     };
 
-    public JobRunRecord ToRecord() => new(Id, OrganisationId, SiteId, Kind, ScheduledFor, StartedAt, FinishedAt, Outcome, Message, CaughtUp);
+    public JobRunRecord ToRecord(bool withOutput = true) => new(Id, OrganisationId, SiteId, Kind, ScheduledFor, StartedAt, FinishedAt, Outcome, Message, CaughtUp, withOutput ? Output : null);
 }

@@ -19,7 +19,7 @@ internal sealed class JobRunRepository(LiteDbCanopyStore store) : IJobRunStore
     {
         List<JobRunRecord> runs = store.JobRunCollection.Find(j => j.SiteId == siteId)
             .Where(j => j.OrganisationId == organisationId)
-            .Select(j => j.ToRecord())
+            .Select(j => j.ToRecord(withOutput: false))
             .OrderByDescending(j => j.ScheduledFor)
             .ThenByDescending(j => j.StartedAt)
             .Take(Math.Max(0, limit))
@@ -27,11 +27,21 @@ internal sealed class JobRunRepository(LiteDbCanopyStore store) : IJobRunStore
         return Task.FromResult<IReadOnlyList<JobRunRecord>>(runs);
     }
 
+    public Task<JobRunRecord?> LatestWithOutputAsync(string organisationId, string siteId, string kind, CancellationToken cancellationToken = default)
+    {
+        string key = Keys.Join(organisationId, siteId, kind);
+        JobRunRecord? latest = store.JobRunCollection.Find(j => j.SiteKind == key)
+            .Where(j => j.Output is not null)
+            .OrderByDescending(j => j.ScheduledFor)
+            .FirstOrDefault()?.ToRecord();
+        return Task.FromResult(latest);
+    }
+
     public Task<JobRunRecord?> LastAsync(string organisationId, string siteId, string kind, CancellationToken cancellationToken = default)
     {
         string key = Keys.Join(organisationId, siteId, kind);
         JobRunRecord? last = store.JobRunCollection.Find(j => j.SiteKind == key)
-            .Select(j => j.ToRecord())
+            .Select(j => j.ToRecord(withOutput: false))
             .OrderByDescending(j => j.ScheduledFor)
             .FirstOrDefault();
         return Task.FromResult(last);
