@@ -50,7 +50,13 @@ internal sealed partial class SiteJobScheduler(
             await ScheduleAsync(organisationId, sites.Where(s => s.OrganisationId == organisationId).ToList(), cancellationToken);
         }
 
-        _catchUp = Task.Run(() => CatchUpAsync(sites, _stopping.Token), CancellationToken.None);
+        _catchUp = Task.Run(
+            async () =>
+            {
+                int runs = await CatchUpAsync(sites, _stopping.Token);
+                LogCatchUpDone(logger, runs);
+            },
+            CancellationToken.None);
     }
 
     /// <summary>Runs, once each, the site jobs whose last fire time by now was missed (what start does in the background).</summary>
@@ -168,6 +174,9 @@ internal sealed partial class SiteJobScheduler(
 
     [LoggerMessage(Level = LogLevel.Information, Message = "Catching up job {Kind} of site {SiteId}, missed at {Missed}")]
     private static partial void LogCatchUp(ILogger logger, string kind, string siteId, Instant missed);
+
+    [LoggerMessage(Level = LogLevel.Information, Message = "Job catch-up on start done: {Runs} missed run(s) made")]
+    private static partial void LogCatchUpDone(ILogger logger, int runs);
 
     [LoggerMessage(Level = LogLevel.Warning, Message = "Site {SiteId} does not read ({Problem}); it has no scheduled jobs")]
     private static partial void LogUnreadable(ILogger logger, string siteId, string problem);
