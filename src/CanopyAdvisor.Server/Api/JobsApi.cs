@@ -29,7 +29,36 @@ internal static class JobsApi
         group.MapGet("/task-list/latest", LatestTaskList)
             .WithSummary("The latest stored rotation task list")
             .WithDescription("The tasks of the day of the latest task-list run that stored one: date, time zone and each task (bench, lot, crew, turn, pots, start, end, labour).");
+        group.MapGet("/weekly-outlook/latest", LatestOutlookPage)
+            .WithSummary("The latest stored weekly outlook page")
+            .WithDescription("The printable page (HTML) of the latest weekly-outlook run that stored one.")
+            .Produces<string>(StatusCodes.Status200OK, "text/html");
+        group.MapGet("/weekly-outlook/latest.csv", LatestOutlookCsv)
+            .WithSummary("The latest stored weekly outlook as CSV")
+            .Produces<string>(StatusCodes.Status200OK, "text/csv");
         return group;
+    }
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> LatestOutlookPage(
+        string siteId, ClaimsPrincipal principal, ICanopyStore store, CancellationToken cancellationToken) =>
+        LatestOutlookAsync(siteId, principal, store, o => TypedResults.Text(o.Page, "text/html; charset=utf-8"), cancellationToken);
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> LatestOutlookCsv(
+        string siteId, ClaimsPrincipal principal, ICanopyStore store, CancellationToken cancellationToken) =>
+        LatestOutlookAsync(siteId, principal, store, o => TypedResults.Text(o.Csv, "text/csv; charset=utf-8"), cancellationToken);
+
+    private static async Task<Results<ContentHttpResult, ProblemHttpResult>> LatestOutlookAsync(
+        string siteId, ClaimsPrincipal principal, ICanopyStore store, Func<StoredOutlook, ContentHttpResult> answer, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is null)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        return await store.JobRuns.LatestWithOutputAsync(caller.OrganisationId, siteId, JobKinds.WeeklyOutlook, cancellationToken) is { Output: { } output }
+            ? answer(WeeklyOutlookWork.Read(output))
+            : ApiProblems.NotFound("weekly outlook");
     }
 
     private static async Task<Results<Ok<SiteJobsView>, ProblemHttpResult>> List(

@@ -15,6 +15,7 @@ internal static partial class JobSetup
         services.AddQuartz(q => q.UseInMemoryStore());
         services.AddQuartzHostedService(o => o.WaitForJobsToComplete = true);
         services.AddSingleton<ISiteJobWork, NightlyForecastWork>();
+        services.AddSingleton<ISiteJobWork, WeeklyOutlookWork>();
         services.AddSingleton<ISiteJobWork, TaskListWork>();
         services.AddSingleton<SiteJobRunner>();
         services.AddSingleton<SiteJobScheduler>();

@@ -86,6 +86,47 @@ public sealed class JobsTests : IDisposable
     }
 
     [Fact]
+    public async Task The_weekly_outlook_is_stored_on_monday_and_the_next_one_compares_with_it()
+    {
+        (HttpClient admin, string siteId) = await IndoorOnlyAsync();
+        Assert.Equal(HttpStatusCode.NotFound, (await admin.GetAsync($"/api/sites/{siteId}/jobs/weekly-outlook/latest")).StatusCode);
+
+        // The demo lots are sold by 2026-12-06; keep them growing to 2027-01-29 so both outlooks have lots to show.
+        (System.Text.Json.Nodes.JsonObject site, int version) = await SiteEditing.ReadAsync(admin, siteId);
+        foreach (System.Text.Json.Nodes.JsonNode? lot in site["lots"]!.AsArray())
+        {
+            lot!["saleOn"] = "2027-01-29";
+        }
+
+        Assert.Equal(HttpStatusCode.OK, (await SiteEditing.ReplaceAsync(admin, siteId, site, version)).StatusCode);
+
+        // To Monday 2026-12-07 13:00Z (07:00 CST): Monday's 06:00 CST outlook was missed and runs once.
+        _factory.Clock.Advance(Duration.FromDays(5) + Duration.FromHours(5));
+        await Scheduler.CatchUpNowAsync(CancellationToken.None);
+        JsonElement first = Assert.Single(await RunsAsync(admin, siteId, JobKinds.WeeklyOutlook));
+        Assert.Equal("2026-12-07T06:00:00-06:00", first.GetProperty("scheduledFor").GetString());
+        Assert.True(first.GetProperty("outcome").GetString() == JobKinds.Succeeded, first.GetProperty("message").GetString());
+        Assert.DoesNotContain("compared", first.GetProperty("message").GetString(), StringComparison.Ordinal);
+
+        HttpResponseMessage page = await admin.GetAsync($"/api/sites/{siteId}/jobs/weekly-outlook/latest");
+        Assert.Equal(HttpStatusCode.OK, page.StatusCode);
+        Assert.Equal("text/html", page.Content.Headers.ContentType?.MediaType);
+        Assert.Contains("Demo indoor farm room", await page.Content.ReadAsStringAsync(), StringComparison.Ordinal);
+        HttpResponseMessage csv = await admin.GetAsync($"/api/sites/{siteId}/jobs/weekly-outlook/latest.csv");
+        Assert.Equal("text/csv", csv.Content.Headers.ContentType?.MediaType);
+        // One line per bench with a lot after the header: the indoor demo has 12 (3 racks × 4 tiers, Files/Sites/DemoSites.cs).
+        Assert.Equal(13, (await csv.Content.ReadAsStringAsync()).Split('\n', StringSplitOptions.RemoveEmptyEntries).Length);
+
+        // A week on: the next outlook compares with the stored one.
+        _factory.Clock.Advance(Duration.FromDays(7));
+        await Scheduler.CatchUpNowAsync(CancellationToken.None);
+        List<JsonElement> runs = await RunsAsync(admin, siteId, JobKinds.WeeklyOutlook);
+        Assert.Equal(2, runs.Count);
+        Assert.Equal("2026-12-14T06:00:00-06:00", runs[0].GetProperty("scheduledFor").GetString());
+        Assert.Contains("compared with the previous one", runs[0].GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task Every_role_reads_the_schedule_in_the_site_s_zone_and_other_organisations_get_404()
     {
         string other = await _factory.AddOtherOrganisationAsync();
