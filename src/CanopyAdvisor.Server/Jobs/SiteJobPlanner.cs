@@ -16,21 +16,12 @@ namespace CanopyAdvisor.Server.Jobs;
 /// spring-forward day (02:30 when the clocks go from 02:00 to 03:00) fires once, at the end of the gap (03:00 local,
 /// the first local time that exists after it), so the night's job is not skipped; a local time that happens twice on a fall-back day (02:30 when the clocks go from 03:00 back
 /// to 02:00) fires once, at its first occurrence (still summer time).</para>
-/// <para>Jobs and times (defaults; a site cannot change them yet): the nightly forecast at 02:00 every day, the weekly
-/// outlook on Monday at 06:00, the rotation task list at the earliest crew start on the days any crew works.</para>
+/// <para>Jobs and times: the nightly forecast every day and the weekly outlook on its day, at the site's
+/// <see cref="Site.Schedule"/> times (default 02:00, and Monday 06:00), and the rotation task list at the earliest crew
+/// start on the days any crew works.</para>
 /// </remarks>
 internal static class SiteJobPlanner
 {
-    /// <summary>The nightly forecast's local time (02:00: after midnight, before any crew starts; common practice for
-    /// nightly batch work).</summary>
-    public static readonly LocalTime NightlyForecastAt = new(2, 0);
-
-    /// <summary>The weekly outlook's day (Monday, the start of the ISO 8601 week).</summary>
-    public const IsoDayOfWeek OutlookDay = IsoDayOfWeek.Monday;
-
-    /// <summary>The weekly outlook's local time.</summary>
-    public static readonly LocalTime OutlookAt = new(6, 0);
-
     private static readonly Duration LookBack = Duration.FromDays(400);
 
     /// <summary>The site's jobs.</summary>
@@ -40,8 +31,8 @@ internal static class SiteJobPlanner
         TimeZoneInfo zone = ZoneOf(site.Zone);
         var plans = new List<SiteJobPlan>
         {
-            new(JobKinds.NightlyForecast, Daily(NightlyForecastAt), zone),
-            new(JobKinds.WeeklyOutlook, Weekly(OutlookAt, [OutlookDay]), zone),
+            new(JobKinds.NightlyForecast, Daily(site.Schedule.NightlyForecastAt), zone),
+            new(JobKinds.WeeklyOutlook, Weekly(site.Schedule.OutlookAt, [site.Schedule.OutlookDay]), zone),
         };
         if (!site.Labour.Crews.IsDefaultOrEmpty)
         {

@@ -88,6 +88,21 @@ public sealed class SiteJobPlannerTests
     }
 
     [Fact]
+    public void The_site_s_schedule_section_sets_the_nightly_and_outlook_times()
+    {
+        var json = System.Text.Json.Nodes.JsonNode.Parse(DemoSites.ReadText(DemoSites.Names[0]))!.AsObject();
+        json["schedule"] = System.Text.Json.Nodes.JsonNode.Parse("""{"nightlyForecastAt": "03:15", "outlookDay": "fri", "outlookAt": "17:30"}""");
+        Site site = new SiteFileReader(ServerBeamFactory.Instance).Parse(json.ToJsonString(), "demo", baseDirectory: null);
+        IReadOnlyList<SiteJobPlan> plans = SiteJobPlanner.For(site);
+        Assert.Equal("0 15 3 * * ?", plans[0].Cron);
+        Assert.Equal("0 30 17 ? * FRI", plans[1].Cron);
+
+        // From Wednesday 2026-12-02 12:00Z the next outlook is Friday 2026-12-04 17:30 local.
+        Instant outlook = SiteJobPlanner.NextFireAfter(plans[1], Instant.FromUtc(2026, 12, 2, 12, 0))!.Value;
+        Assert.Equal(new LocalDateTime(2026, 12, 4, 17, 30), outlook.InZone(site.Zone).LocalDateTime);
+    }
+
+    [Fact]
     public void The_last_fire_between_two_instants_is_the_latest_one_not_after_now()
     {
         SiteJobPlan plan = Daily("Europe/Amsterdam", 2, 0);
