@@ -31,6 +31,7 @@ internal sealed partial class SiteJobScheduler(
     ILogger<SiteJobScheduler> logger) : IHostedService, IDisposable
 {
     private readonly CancellationTokenSource _stopping = new();
+    private readonly SemaphoreSlim _rebuilding = new(1, 1);
     private Task _catchUp = Task.CompletedTask;
 
     /// <summary>The catch-up started at start (complete when there was nothing to do); tests await it.</summary>
@@ -83,7 +84,11 @@ internal sealed partial class SiteJobScheduler(
     }
 
     /// <inheritdoc />
-    public void Dispose() => _stopping.Dispose();
+    public void Dispose()
+    {
+        _stopping.Dispose();
+        _rebuilding.Dispose();
+    }
 
     /// <summary>Rebuilds the triggers of an organisation's sites from the store (after a site is created, replaced or
     /// deleted).</summary>
@@ -94,11 +99,34 @@ internal sealed partial class SiteJobScheduler(
             return;
         }
 
-        IReadOnlyList<SiteRecord> sites = await store.Sites.ListAsync(organisationId, cancellationToken);
-        await ScheduleAsync(organisationId, sites, cancellationToken);
+        // One rebuild at a time, reading the sites inside it, so two site writes at once cannot interleave or apply an
+        // older list after a newer one.
+        await _rebuilding.WaitAsync(cancellationToken);
+        try
+        {
+            IReadOnlyList<SiteRecord> sites = await store.Sites.ListAsync(organisationId, cancellationToken);
+            await RebuildAsync(organisationId, sites, cancellationToken);
+        }
+        finally
+        {
+            _rebuilding.Release();
+        }
     }
 
     private async Task ScheduleAsync(string organisationId, IReadOnlyList<SiteRecord> sites, CancellationToken cancellationToken)
+    {
+        await _rebuilding.WaitAsync(cancellationToken);
+        try
+        {
+            await RebuildAsync(organisationId, sites, cancellationToken);
+        }
+        finally
+        {
+            _rebuilding.Release();
+        }
+    }
+
+    private async Task RebuildAsync(string organisationId, IReadOnlyList<SiteRecord> sites, CancellationToken cancellationToken)
     {
         IScheduler scheduler = await schedulers.GetScheduler(cancellationToken);
         await scheduler.DeleteJobs(GroupMatcher<JobKey>.GroupEquals(organisationId), cancellationToken);
