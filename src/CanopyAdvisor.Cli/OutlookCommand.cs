@@ -1,14 +1,7 @@
 using System.CommandLine;
-using System.Collections.Immutable;
-using CanopyAdvisor.Core;
-using CanopyAdvisor.Core.Advice;
-using CanopyAdvisor.Core.Advice.Labour;
-using CanopyAdvisor.Core.Advice.Rotation;
 using CanopyAdvisor.Core.Forecast;
-using CanopyAdvisor.Core.Light;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Validation;
-using CanopyAdvisor.Reports.Calendar;
 using CanopyAdvisor.Reports.Outlook;
 using NodaTime;
 
@@ -28,9 +21,6 @@ internal static class OutlookCommand
 
     /// <summary>The rotation calendar's file name in the output folder (iCalendar, RFC 5545).</summary>
     public const string CalendarFile = "rotations.ics";
-
-    /// <summary>The longest rotation plan checked, 366 days (<c>ForecastRequest.Horizon</c>).</summary>
-    private static readonly Duration MaximumPlanHorizon = Duration.FromDays(366);
 
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
@@ -70,49 +60,20 @@ internal static class OutlookCommand
             }
 
             var request = new ForecastRequest(site, loaded.Crops, loaded.Outside, loaded.Temperature, loaded.Now);
-            ForecastSession session = ForecastSession.Prepare(request);
-            SiteForecast forecast = session.Run(new ProgressReporter(error, "forecasting", interactive));
-            LocalDate first = forecast.Now.InZone(site.Zone).Date;
-            LocalDate last = (forecast.HorizonEnd - Duration.Epsilon).InZone(site.Zone).Date;
-            LightPeriodSummary light = LightSimulation.Run(
-                session.Field, loaded.Outside, first, last, progress: new ProgressReporter(error, "daily light", interactive));
-
-            var notes = new List<string>
-            {
-                $"Daylight: {DaylightSource.Describe(site, loaded.WeatherPath)}; air: {ForecastInputs.DescribeTemperatures(site, loaded.TemperaturePath)}.",
-            };
-            if (earlier.Note is string remark)
-            {
-                notes.Add(char.ToUpperInvariant(remark[0]) + remark[1..] + ".");
-            }
-
-            // The rotation advice to each lot's sale, and its turns on the site's crews.
-            Instant lastSale = site.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(site.Zone).ToInstant());
-            Duration toSale = lastSale - loaded.Now;
-            Duration planHorizon = toSale > MaximumPlanHorizon ? MaximumPlanHorizon : toSale < request.Horizon ? request.Horizon : toSale;
-            ForecastSession planning = ForecastSession.Prepare(request with { Horizon = planHorizon, IncludeUncertainty = false });
-            RotationPlan plan = RotationPolicyPlanner.Plan(planning, RotationPolicyOptions.Default, new ProgressReporter(error, "rotation plan", interactive));
-            LabourSchedule schedule = RotationCalendar.Schedule(site, plan);
-            (ImmutableArray<BenchAdviceSummary> advice, double rotationHours) = OutlookAdvice.From(plan, schedule, forecast.Now, forecast.HorizonEnd);
-            notes.Add(string.Create(
-                System.Globalization.CultureInfo.InvariantCulture,
-                $"Rotation: the least turning that keeps each bench's lean at least {ModelConstants.RotationGradeMargin * 100:0} % under its grade limit to the sale, scheduled on the site's crews (rotations.ics); the lean figures assume nobody turns the pots."));
-
-            OutlookReport report = OutlookReport.Build(new OutlookInput(site, forecast, loaded.Crops, BenchDayDli.From(light))
-            {
-                Previous = earlier.Snapshot,
-                Notes = notes,
-                Advice = advice,
-                RotationHoursThisWeek = rotationHours,
-            });
+            WeeklyOutlookFiles outlook = WeeklyOutlook.Build(
+                request,
+                earlier,
+                [$"Daylight: {DaylightSource.Describe(site, loaded.WeatherPath)}; air: {ForecastInputs.DescribeTemperatures(site, loaded.TemperaturePath)}."],
+                clock.GetCurrentInstant(),
+                stage => new ProgressReporter(error, stage, interactive));
 
             Directory.CreateDirectory(folder);
             string[] written = OutputFiles.WriteAll(folder, new Dictionary<string, string>(StringComparer.Ordinal)
             {
-                [PageFile] = OutlookPage.Render(report),
-                [CsvFile] = OutlookCsv.Write(report),
-                [SnapshotFile] = OutlookSnapshotJson.Write(OutlookSnapshot.From(report)),
-                [CalendarFile] = RotationCalendarIcs.Write(site, schedule, clock.GetCurrentInstant()),
+                [PageFile] = outlook.Page,
+                [CsvFile] = outlook.Csv,
+                [SnapshotFile] = outlook.Snapshot,
+                [CalendarFile] = outlook.Calendar,
             });
             foreach (string path in written)
             {

@@ -26,6 +26,9 @@ public interface ICanopyStore : IDisposable
     /// <summary>Forecasts kept by the hash of their inputs.</summary>
     IForecastStore Forecasts { get; }
 
+    /// <summary>The history of scheduled job runs.</summary>
+    IJobRunStore JobRuns { get; }
+
     /// <summary>Adds an organisation with its first users and sites in one atomic write (used to seed the demo and to
     /// register an organisation).</summary>
     /// <param name="organisation">The organisation.</param>

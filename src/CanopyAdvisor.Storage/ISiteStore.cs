@@ -6,6 +6,10 @@ public interface ISiteStore
     /// <summary>The organisation's sites, by site key.</summary>
     Task<IReadOnlyList<SiteRecord>> ListAsync(string organisationId, CancellationToken cancellationToken = default);
 
+    /// <summary>Every site of every organisation (for the service's own work, such as building job schedules at start;
+    /// never for answering a caller).</summary>
+    Task<IReadOnlyList<SiteRecord>> ListAllAsync(CancellationToken cancellationToken = default);
+
     /// <summary>The site with this id in this organisation, or null (also for a site of another organisation).</summary>
     Task<SiteRecord?> GetAsync(string organisationId, string id, CancellationToken cancellationToken = default);
 
@@ -18,6 +22,6 @@ public interface ISiteStore
     /// <see cref="WriteOutcome.KeyTaken"/> (another site of the organisation has the new site key) write nothing.</summary>
     Task<WriteOutcome> ReplaceAsync(SiteRecord site, int expectedVersion, CancellationToken cancellationToken = default);
 
-    /// <summary>Deletes a site and its forecasts in one atomic write; false when there is no such site in the organisation.</summary>
+    /// <summary>Deletes a site with its forecasts and job runs in one atomic write; false when there is no such site in the organisation.</summary>
     Task<bool> DeleteAsync(string organisationId, string id, CancellationToken cancellationToken = default);
 }

@@ -40,4 +40,7 @@ public sealed record Site(
 
     /// <summary>Who turns pots and how long it takes, for the rotation calendar; <see cref="LabourSettings.Default"/> when not given.</summary>
     public LabourSettings Labour { get; init; } = LabourSettings.Default;
+
+    /// <summary>When the service runs the site's nightly forecast and weekly outlook; <see cref="JobScheduleSettings.Default"/> when not given.</summary>
+    public JobScheduleSettings Schedule { get; init; } = JobScheduleSettings.Default;
 }

@@ -166,6 +166,7 @@ public sealed class SiteFileReader
             TemperatureSetpoints temperatures = ReadTemperatures(root);
             EnergyTariff tariff = ReadTariff(root);
             LabourSettings labour = ReadLabour(root);
+            JobScheduleSettings schedule = ReadSchedule(root);
             ReadLots(root, zone);
             root.Finish();
 
@@ -185,6 +186,7 @@ public sealed class SiteFileReader
                 Temperatures = temperatures,
                 Tariff = tariff,
                 Labour = labour,
+                Schedule = schedule,
             };
             var paths = new SitePaths(
                 i => benchPaths[i],
@@ -818,6 +820,34 @@ public sealed class SiteFileReader
 
             o.Finish();
             return new LabourSettings(secondsPerPot, setUp, [.. crews], [.. holidays]);
+        }
+
+        private static JobScheduleSettings ReadSchedule(JsonObjectReader root)
+        {
+            JobScheduleSettings defaults = JobScheduleSettings.Default;
+            JsonObjectReader? o = root.Object("schedule", required: false);
+            if (o is null)
+            {
+                return defaults;
+            }
+
+            LocalTime nightly = (o.Has("nightlyForecastAt") ? ReadTime(o, "nightlyForecastAt") : null) ?? defaults.NightlyForecastAt;
+            LocalTime outlookAt = (o.Has("outlookAt") ? ReadTime(o, "outlookAt") : null) ?? defaults.OutlookAt;
+            IsoDayOfWeek outlookDay = defaults.OutlookDay;
+            if (o.Text("outlookDay", required: false) is string day)
+            {
+                if (DayOfWeek(day) is IsoDayOfWeek known)
+                {
+                    outlookDay = known;
+                }
+                else
+                {
+                    o.Error("outlookDay", $"must be a day of the week, one of {string.Join(", ", DayNames)}; got '{day}'");
+                }
+            }
+
+            o.Finish();
+            return new JobScheduleSettings(nightly, outlookDay, outlookAt);
         }
 
         private Crew ReadCrew(JsonElement item, string path)

@@ -73,6 +73,24 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             return (stored, true);
         }
 
+        (Site model, ForecastRequest request) = BuildRequest(site, now, days, band);
+
+        // Validation inside Prepare throws InvalidInputException (unknown crops, lots on unknown benches): a 400, nothing stored.
+        SiteForecast forecast = await Task.Run(() => ForecastSession.Prepare(request).Run(cancellationToken: cancellationToken), cancellationToken);
+        string id = ApiTokens.NewId("fc");
+        Instant createdAt = clock.GetCurrentInstant();
+        ForecastView view = ToView(id, site, hash, createdAt, caller.UserId, model, forecast, band);
+        var record = new ForecastRecord(id, site.OrganisationId, site.Id, site.Version, hash, createdAt, caller.UserId, JsonSerializer.Serialize(view, json.Value.SerializerOptions));
+        ForecastRecord kept = await store.Forecasts.AddAsync(record, cancellationToken);
+        return (kept, kept.Id != id);
+    }
+
+    /// <summary>The forecast request of a stored site as this service runs it: the site file, the crop library, clear sky
+    /// × the site's clearness, the site's temperature setpoints.</summary>
+    /// <exception cref="InvalidInputException">The site has no lots.</exception>
+    public (Site Model, ForecastRequest Request) BuildRequest(SiteRecord site, Instant now, double days, bool band)
+    {
+        ArgumentNullException.ThrowIfNull(site);
         Site model = new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null);
         if (model.Lots.IsDefaultOrEmpty)
         {
@@ -98,15 +116,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             Horizon = Duration.FromHours(days * 24),
             IncludeUncertainty = band,
         };
-
-        // Validation inside Prepare throws InvalidInputException (unknown crops, lots on unknown benches): a 400, nothing stored.
-        SiteForecast forecast = await Task.Run(() => ForecastSession.Prepare(request).Run(cancellationToken: cancellationToken), cancellationToken);
-        string id = ApiTokens.NewId("fc");
-        Instant createdAt = clock.GetCurrentInstant();
-        ForecastView view = ToView(id, site, hash, createdAt, caller.UserId, model, forecast, band);
-        var record = new ForecastRecord(id, site.OrganisationId, site.Id, site.Version, hash, createdAt, caller.UserId, JsonSerializer.Serialize(view, json.Value.SerializerOptions));
-        ForecastRecord kept = await store.Forecasts.AddAsync(record, cancellationToken);
-        return (kept, kept.Id != id);
+        return (model, request);
     }
 
     // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.

@@ -2,6 +2,7 @@ using System.Net;
 using CanopyAdvisor.Server.Accounts;
 using CanopyAdvisor.Server.Api;
 using CanopyAdvisor.Server.Forecasting;
+using CanopyAdvisor.Server.Jobs;
 using CanopyAdvisor.Server.OpenApi;
 using CanopyAdvisor.Server.Problems;
 using CanopyAdvisor.Storage;
@@ -34,7 +35,7 @@ internal static class ServiceSetup
             kestrel.AddServerHeader = false;
         });
 
-        services.AddSingleton<IClock>(SystemClock.Instance);
+        services.AddSingleton(_ => StartingClock.FromSettings(builder.Configuration));
         services.AddSingleton<ICanopyStore>(provider =>
         {
             CanopyServerOptions settings = provider.GetRequiredService<IOptions<CanopyServerOptions>>().Value;
@@ -45,6 +46,7 @@ internal static class ServiceSetup
         services.AddSingleton<ForecastRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
+        services.AddCanopyJobs();
 
         services.ConfigureHttpJsonOptions(o => ServerJson.Configure(o.SerializerOptions));
         services.AddProblemDetails();
@@ -91,6 +93,7 @@ internal static class ServiceSetup
         app.UseAuthentication();
         app.UseRateLimiter();
         app.UseAuthorization();
+        app.UseSiteJobRefresh();
 
         app.MapOpenApi().AllowAnonymous();
         app.MapHealthChecks("/health").AllowAnonymous();
@@ -101,6 +104,7 @@ internal static class ServiceSetup
         app.MapForecastsApi();
         app.MapCropsApi();
         app.MapMapsApi();
+        app.MapJobsApi();
         app.MapWebPages();
         return app;
     }

@@ -65,6 +65,7 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         TokenCollection = _db.GetCollection<ApiTokenDocument>("apiTokens");
         SiteCollection = _db.GetCollection<SiteDocument>("sites");
         ForecastCollection = _db.GetCollection<ForecastDocument>("forecasts");
+        JobRunCollection = _db.GetCollection<JobRunDocument>("jobRuns");
 
         UserCollection.EnsureIndex(u => u.Email, unique: true);
         UserCollection.EnsureIndex(u => u.OrganisationId);
@@ -74,12 +75,15 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         SiteCollection.EnsureIndex(s => s.OrganisationId);
         ForecastCollection.EnsureIndex(f => f.InputKey, unique: true);
         ForecastCollection.EnsureIndex(f => f.SiteId);
+        JobRunCollection.EnsureIndex(j => j.SiteKind);
+        JobRunCollection.EnsureIndex(j => j.SiteId);
 
         Organisations = new OrganisationRepository(this);
         Users = new UserRepository(this);
         ApiTokens = new ApiTokenRepository(this);
         Sites = new SiteRepository(this);
         Forecasts = new ForecastRepository(this);
+        JobRuns = new JobRunRepository(this);
     }
 
     /// <inheritdoc />
@@ -97,6 +101,9 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     /// <inheritdoc />
     public IForecastStore Forecasts { get; }
 
+    /// <inheritdoc />
+    public IJobRunStore JobRuns { get; }
+
     internal ILiteCollection<OrganisationDocument> OrganisationCollection { get; }
 
     internal ILiteCollection<UserDocument> UserCollection { get; }
@@ -106,6 +113,8 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     internal ILiteCollection<SiteDocument> SiteCollection { get; }
 
     internal ILiteCollection<ForecastDocument> ForecastCollection { get; }
+
+    internal ILiteCollection<JobRunDocument> JobRunCollection { get; }
 
     /// <inheritdoc />
     public Task<WriteOutcome> AddOrganisationAsync(

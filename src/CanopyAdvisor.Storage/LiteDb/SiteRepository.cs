@@ -12,6 +12,16 @@ internal sealed class SiteRepository(LiteDbCanopyStore store) : ISiteStore
         return Task.FromResult<IReadOnlyList<SiteRecord>>(sites);
     }
 
+    public Task<IReadOnlyList<SiteRecord>> ListAllAsync(CancellationToken cancellationToken = default)
+    {
+        List<SiteRecord> sites = store.SiteCollection.FindAll()
+            .Select(s => s.ToRecord())
+            .OrderBy(s => s.OrganisationId, StringComparer.Ordinal)
+            .ThenBy(s => s.SiteKey, StringComparer.Ordinal)
+            .ToList();
+        return Task.FromResult<IReadOnlyList<SiteRecord>>(sites);
+    }
+
     public Task<SiteRecord?> GetAsync(string organisationId, string id, CancellationToken cancellationToken = default)
     {
         SiteDocument? site = store.SiteCollection.FindById(id);
@@ -59,6 +69,7 @@ internal sealed class SiteRepository(LiteDbCanopyStore store) : ISiteStore
             }
 
             store.ForecastCollection.DeleteMany(f => f.SiteId == id);
+            store.JobRunCollection.DeleteMany(j => j.SiteId == id);
             store.SiteCollection.Delete(id);
             return true;
         }));
