@@ -26,6 +26,12 @@ public interface ICanopyStore : IDisposable
     /// <summary>Forecasts kept by the hash of their inputs.</summary>
     IForecastStore Forecasts { get; }
 
+    /// <summary>Observations (measured leans) per site.</summary>
+    IObservationStore Observations { get; }
+
+    /// <summary>Rotations done per site.</summary>
+    IRotationDoneStore RotationsDone { get; }
+
     /// <summary>Adds an organisation with its first users and sites in one atomic write (used to seed the demo and to
     /// register an organisation).</summary>
     /// <param name="organisation">The organisation.</param>

@@ -23,7 +23,8 @@ namespace CanopyAdvisor.Server.Forecasting;
 /// served from the store.</summary>
 /// <remarks>The inputs hashed: the stored site file text, the crop library version (<see cref="CropCatalogue.Version"/>),
 /// the model build (the module version id of CanopyAdvisor.Core, which deterministic builds derive from its content),
-/// the start instant, the horizon and whether the band is included. Nothing else feeds the forecast.</remarks>
+/// the start instant, the horizon, whether the band is included, and the stored rotations done (applied to the lots).
+/// Nothing else feeds the forecast.</remarks>
 internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IClock clock, IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions> json)
 {
     /// <summary>The default horizon, days.</summary>
@@ -67,13 +68,14 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         }
 
         bool band = options.IncludeBand ?? true;
-        string hash = HashInputs(site.Json, crops.Version, now, days, band);
+        IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
+        string hash = HashInputs(site.Json, crops.Version, now, days, band, RotationsDoneText(done));
         if (await store.Forecasts.FindByHashAsync(site.OrganisationId, site.Id, hash, cancellationToken) is { } stored)
         {
             return (stored, true);
         }
 
-        Site model = new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null);
+        Site model = WithRotationsDone(new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null), done);
         if (model.Lots.IsDefaultOrEmpty)
         {
             throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
@@ -123,8 +125,53 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             ?? throw new InvalidOperationException($"Stored forecast {record.Id} is empty.");
     }
 
+    /// <summary>The site with the stored rotations done added to its lots' <see cref="Lot.Rotations"/> (time order).</summary>
+    /// <remarks>A rotation done after its lot's <c>measuredOn</c> day is left out: the site's rules (SiteValidator.CheckLot)
+    /// take that date as the lot's "now" and would reject the whole forecast; measure the lot again (a grower edits the
+    /// lot's height and date) to bring later rotations in.</remarks>
+    public static Site WithRotationsDone(Site model, IReadOnlyList<RotationDoneRecord> done)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(done);
+        if (done.Count == 0 || model.Lots.IsDefaultOrEmpty)
+        {
+            return model;
+        }
+
+        var lots = model.Lots.Select(lot =>
+        {
+            Instant until = lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(model.Zone).ToInstant();
+            var extra = done.Where(r => r.LotId == lot.Id && r.At < until).Select(r => new RotationRecord(r.At, Core.Geometry.Angle.FromDegrees(r.AngleDeg))).ToList();
+            return extra.Count == 0
+                ? lot
+                : lot with { Rotations = [.. (lot.Rotations.IsDefault ? [] : lot.Rotations).Concat(extra).OrderBy(r => r.At)] };
+        });
+        return model with { Lots = [.. lots] };
+    }
+
+    /// <summary>The rotations done as hashed: one line per rotation (lot, instant, angle), in time order.</summary>
+    public static string RotationsDoneText(IReadOnlyList<RotationDoneRecord> done)
+    {
+        ArgumentNullException.ThrowIfNull(done);
+        var text = new StringBuilder();
+        foreach (RotationDoneRecord r in done.OrderBy(r => r.At).ThenBy(r => r.LotId, StringComparer.Ordinal).ThenBy(r => r.AngleDeg))
+        {
+            text.Append(r.LotId).Append(' ').Append(InstantPattern.ExtendedIso.Format(r.At)).Append(' ')
+                .Append(r.AngleDeg.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
+        }
+
+        return text.ToString();
+    }
+
     /// <summary>Lower-case hex SHA-256 of the forecast's inputs, each on its own labelled line.</summary>
-    public static string HashInputs(string siteJson, string cropLibraryVersion, Instant now, double days, bool band)
+    /// <param name="siteJson">The stored site file text.</param>
+    /// <param name="cropLibraryVersion">The crop library version.</param>
+    /// <param name="now">The start.</param>
+    /// <param name="days">The horizon, days.</param>
+    /// <param name="band">Whether the band is included.</param>
+    /// <param name="rotationsDone">The stored rotations done (<see cref="RotationsDoneText"/>); empty adds nothing, so
+    /// hashes of sites without any stay as they were.</param>
+    public static string HashInputs(string siteJson, string cropLibraryVersion, Instant now, double days, bool band, string rotationsDone = "")
     {
         ArgumentNullException.ThrowIfNull(siteJson);
         var text = new StringBuilder();
@@ -135,6 +182,10 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         text.Append("days ").Append(days.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
         text.Append("band ").Append(band ? "yes" : "no").Append('\n');
         text.Append("site ").Append(siteJson.Length.ToString(CultureInfo.InvariantCulture)).Append('\n').Append(siteJson);
+        if (!string.IsNullOrEmpty(rotationsDone))
+        {
+            text.Append("\nrotations-done ").Append(rotationsDone.Length.ToString(CultureInfo.InvariantCulture)).Append('\n').Append(rotationsDone);
+        }
         return Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text.ToString())));
     }
 

@@ -99,6 +99,7 @@ internal static class ServiceSetup
         app.MapSitesApi();
         app.MapForecastsApi();
         app.MapCropsApi();
+        app.MapGrowerRecordsApi();
         return app;
     }
 }

@@ -65,6 +65,8 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         TokenCollection = _db.GetCollection<ApiTokenDocument>("apiTokens");
         SiteCollection = _db.GetCollection<SiteDocument>("sites");
         ForecastCollection = _db.GetCollection<ForecastDocument>("forecasts");
+        ObservationCollection = _db.GetCollection<ObservationDocument>("observations");
+        RotationDoneCollection = _db.GetCollection<RotationDoneDocument>("rotationsDone");
 
         UserCollection.EnsureIndex(u => u.Email, unique: true);
         UserCollection.EnsureIndex(u => u.OrganisationId);
@@ -74,12 +76,16 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         SiteCollection.EnsureIndex(s => s.OrganisationId);
         ForecastCollection.EnsureIndex(f => f.InputKey, unique: true);
         ForecastCollection.EnsureIndex(f => f.SiteId);
+        ObservationCollection.EnsureIndex(o => o.SiteId);
+        RotationDoneCollection.EnsureIndex(r => r.SiteId);
 
         Organisations = new OrganisationRepository(this);
         Users = new UserRepository(this);
         ApiTokens = new ApiTokenRepository(this);
         Sites = new SiteRepository(this);
         Forecasts = new ForecastRepository(this);
+        Observations = new ObservationRepository(this);
+        RotationsDone = new RotationDoneRepository(this);
     }
 
     /// <inheritdoc />
@@ -97,6 +103,12 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     /// <inheritdoc />
     public IForecastStore Forecasts { get; }
 
+    /// <inheritdoc />
+    public IObservationStore Observations { get; }
+
+    /// <inheritdoc />
+    public IRotationDoneStore RotationsDone { get; }
+
     internal ILiteCollection<OrganisationDocument> OrganisationCollection { get; }
 
     internal ILiteCollection<UserDocument> UserCollection { get; }
@@ -106,6 +118,10 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     internal ILiteCollection<SiteDocument> SiteCollection { get; }
 
     internal ILiteCollection<ForecastDocument> ForecastCollection { get; }
+
+    internal ILiteCollection<ObservationDocument> ObservationCollection { get; }
+
+    internal ILiteCollection<RotationDoneDocument> RotationDoneCollection { get; }
 
     /// <inheritdoc />
     public Task<WriteOutcome> AddOrganisationAsync(

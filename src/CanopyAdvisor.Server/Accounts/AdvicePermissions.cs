@@ -1,0 +1,10 @@
+using CanopyAdvisor.Storage;
+
+namespace CanopyAdvisor.Server.Accounts;
+
+/// <summary>Who may write the growers' records and run the advice (the permission matrix; see the server README).</summary>
+internal static class AdvicePermissions
+{
+    /// <summary>Whether the role may add and delete observations and rotations done (growers and admins).</summary>
+    public static bool MayRecordGrowerWork(UserRole role) => role is UserRole.Grower or UserRole.Admin;
+}
