@@ -29,9 +29,6 @@ internal static class OutlookCommand
     /// <summary>The rotation calendar's file name in the output folder (iCalendar, RFC 5545).</summary>
     public const string CalendarFile = "rotations.ics";
 
-    /// <summary>The longest rotation plan checked, 366 days (<c>ForecastRequest.Horizon</c>).</summary>
-    private static readonly Duration MaximumPlanHorizon = Duration.FromDays(366);
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
         var inputs = new ForecastInputs();
@@ -87,12 +84,9 @@ internal static class OutlookCommand
             }
 
             // The rotation advice to each lot's sale, and its turns on the site's crews.
-            Instant lastSale = site.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(site.Zone).ToInstant());
-            Duration toSale = lastSale - loaded.Now;
-            Duration planHorizon = toSale > MaximumPlanHorizon ? MaximumPlanHorizon : toSale < request.Horizon ? request.Horizon : toSale;
-            ForecastSession planning = ForecastSession.Prepare(request with { Horizon = planHorizon, IncludeUncertainty = false });
-            RotationPlan plan = RotationPolicyPlanner.Plan(planning, RotationPolicyOptions.Default, new ProgressReporter(error, "rotation plan", interactive));
-            LabourSchedule schedule = RotationCalendar.Schedule(site, plan);
+            (Duration planHorizon, _) = RotationPlanning.HorizonToSales(site, loaded.Now, request.Horizon);
+            (RotationPlan plan, LabourSchedule schedule) = RotationPlanning.PlanAndSchedule(
+                request with { Horizon = planHorizon }, RotationPolicyOptions.Default, new ProgressReporter(error, "rotation plan", interactive));
             (ImmutableArray<BenchAdviceSummary> advice, double rotationHours) = OutlookAdvice.From(plan, schedule, forecast.Now, forecast.HorizonEnd);
             notes.Add(string.Create(
                 System.Globalization.CultureInfo.InvariantCulture,

@@ -41,20 +41,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
     public async Task<(ForecastRecord Record, bool FromStore)> GetOrRunAsync(SiteRecord site, ForecastOptions options, Caller caller, CancellationToken cancellationToken)
     {
         var errors = new List<ValidationError>();
-        Instant now = clock.GetCurrentInstant();
-        now = Instant.FromUnixTimeTicks(now.ToUnixTimeTicks() - (now.ToUnixTimeTicks() % NodaConstants.TicksPerHour));
-        if (options.Now is not null)
-        {
-            ParseResult<OffsetDateTime> parsed = NowPattern.Parse(options.Now);
-            if (parsed.Success)
-            {
-                now = parsed.Value.ToInstant();
-            }
-            else
-            {
-                errors.Add(new ValidationError("now", "must be an ISO-8601 date and time with an offset, e.g. 2026-12-02T09:00:00+01:00"));
-            }
-        }
+        Instant now = StartOf(options.Now, errors);
 
         double days = options.Days ?? DefaultDays;
         if (!(days > 0 && days <= 366))
@@ -81,21 +68,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
         }
 
-        var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
-        foreach (Lot lot in model.Lots)
-        {
-            if (crops.Library.TryGet(lot.CropId, out Crop? crop))
-            {
-                cropsById[lot.CropId] = crop;
-            }
-        }
-
-        var request = new ForecastRequest(
-            model,
-            cropsById,
-            new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather),
-            new SetpointTemperature(model.Temperatures, model.Location, model.Zone),
-            now)
+        ForecastRequest request = RequestFor(model, now) with
         {
             Horizon = Duration.FromHours(days * 24),
             IncludeUncertainty = band,
@@ -109,6 +82,65 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         var record = new ForecastRecord(id, site.OrganisationId, site.Id, site.Version, hash, createdAt, caller.UserId, JsonSerializer.Serialize(view, json.Value.SerializerOptions));
         ForecastRecord kept = await store.Forecasts.AddAsync(record, cancellationToken);
         return (kept, kept.Id != id);
+    }
+
+    /// <summary>The start of a forecast or plan: the ISO-8601 time given (with an offset), or the start of the current
+    /// hour; a bad time adds an error at <c>now</c>.</summary>
+    public Instant StartOf(string? text, List<ValidationError> errors)
+    {
+        ArgumentNullException.ThrowIfNull(errors);
+        Instant now = clock.GetCurrentInstant();
+        now = Instant.FromUnixTimeTicks(now.ToUnixTimeTicks() - (now.ToUnixTimeTicks() % NodaConstants.TicksPerHour));
+        if (text is null)
+        {
+            return now;
+        }
+
+        ParseResult<OffsetDateTime> parsed = NowPattern.Parse(text);
+        if (parsed.Success)
+        {
+            return parsed.Value.ToInstant();
+        }
+
+        errors.Add(new ValidationError("now", "must be an ISO-8601 date and time with an offset, e.g. 2026-12-02T09:00:00+01:00"));
+        return now;
+    }
+
+    /// <summary>The stored site as the model, with its stored rotations done applied to the lots.</summary>
+    /// <exception cref="InvalidInputException">The site has no lots.</exception>
+    public async Task<(Site Model, IReadOnlyList<RotationDoneRecord> Done)> LoadAsync(SiteRecord site, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(site);
+        IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
+        Site model = WithRotationsDone(new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null), done);
+        if (model.Lots.IsDefaultOrEmpty)
+        {
+            throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
+        }
+
+        return (model, done);
+    }
+
+    /// <summary>The forecast request of a site from a start, as the <c>canopy forecast</c> command builds it: the library's
+    /// crops of its lots, clear sky × the site's clearness, the site's temperature setpoints; default horizon, band on.</summary>
+    public ForecastRequest RequestFor(Site model, Instant now)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
+        foreach (Lot lot in model.Lots.IsDefault ? [] : model.Lots)
+        {
+            if (crops.Library.TryGet(lot.CropId, out Crop? crop))
+            {
+                cropsById[lot.CropId] = crop;
+            }
+        }
+
+        return new ForecastRequest(
+            model,
+            cropsById,
+            new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather),
+            new SetpointTemperature(model.Temperatures, model.Location, model.Zone),
+            now);
     }
 
     // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.

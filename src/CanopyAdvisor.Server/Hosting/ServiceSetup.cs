@@ -43,6 +43,7 @@ internal static class ServiceSetup
         });
         services.AddSingleton<CropCatalogue>();
         services.AddSingleton<ForecastRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.PlanRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
 
@@ -100,6 +101,7 @@ internal static class ServiceSetup
         app.MapForecastsApi();
         app.MapCropsApi();
         app.MapGrowerRecordsApi();
+        app.MapAdviceApi();
         return app;
     }
 }

@@ -1,0 +1,87 @@
+using System.Security.Claims;
+using System.Text;
+using CanopyAdvisor.Reports.Calendar;
+using CanopyAdvisor.Server.Accounts;
+using CanopyAdvisor.Server.Advice;
+using CanopyAdvisor.Server.Contracts;
+using CanopyAdvisor.Server.Hosting;
+using CanopyAdvisor.Server.Problems;
+using CanopyAdvisor.Storage;
+using Microsoft.AspNetCore.Http.HttpResults;
+using NodaTime;
+
+namespace CanopyAdvisor.Server.Api;
+
+/// <summary>The advice of a site: the rotation plan with its labour calendar (JSON, iCalendar, CSV). Long computations
+/// (seconds): they share the forecast's concurrency limit and stop when the client goes away.</summary>
+internal static class AdviceApi
+{
+    /// <summary>The iCalendar media type (RFC 5545 §8.1).</summary>
+    public const string CalendarMediaType = "text/calendar; charset=utf-8";
+
+    /// <summary>The CSV media type with its header parameter (RFC 4180 §3).</summary>
+    public const string CsvMediaType = "text/csv; charset=utf-8; header=present";
+
+    /// <summary>Maps <c>/api/sites/{siteId}/plan</c> and its calendar exports.</summary>
+    public static IEndpointRouteBuilder MapAdviceApi(this IEndpointRouteBuilder routes)
+    {
+        RouteGroupBuilder group = routes.MapGroup("/api/sites/{siteId}").WithTags("Advice");
+        group.MapPost("/plan", Plan)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("Plan the pot rotations to each lot's sale and schedule them on the crews")
+            .WithDescription("Per bench: no rotation, or 90°/180° turns every so often, the least labour that keeps the lean within grade (less a margin) to the sale; the turns placed on the site's crews within their windows. Starts from the stored rotations done. Body optional: {\"now\", \"marginPercent\"}.")
+            .ProducesProblem(StatusCodes.Status400BadRequest);
+        group.MapGet("/plan/calendar.ics", CalendarIcs)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("The rotation calendar as iCalendar (RFC 5545), one event per scheduled turn, UIDs stable across exports")
+            .WithDescription("Query: now (ISO-8601 with offset; default the start of the current hour), marginPercent (default 20).")
+            .Produces<string>(StatusCodes.Status200OK, "text/calendar");
+        group.MapGet("/plan/calendar.csv", CalendarCsv)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("The rotation calendar as CSV (RFC 4180), one row per scheduled turn")
+            .WithDescription("Query: now (ISO-8601 with offset; default the start of the current hour), marginPercent (default 20).")
+            .Produces<string>(StatusCodes.Status200OK, "text/csv");
+        return routes;
+    }
+
+    private static async Task<Results<Ok<PlanView>, ProblemHttpResult>> Plan(
+        string siteId, JsonBody<PlanOptions> body, ClaimsPrincipal principal, ICanopyStore store, PlanRunner planner, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is not { } site)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        PlannedSite planned = await planner.PlanAsync(site, body.Value, cancellationToken);
+        return TypedResults.Ok(PlanViews.From(site.Id, planned));
+    }
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> CalendarIcs(
+        string siteId, string? now, double? marginPercent, ClaimsPrincipal principal, ICanopyStore store, PlanRunner planner, IClock clock, HttpContext context, CancellationToken cancellationToken) =>
+        Calendar(siteId, new PlanOptions(now, marginPercent), principal, store, planner, context, "rotations.ics", CalendarMediaType, planned =>
+            // SEQUENCE (§3.8.7.4): whole hours from the Unix epoch to the plan's start, so a later plan carries a higher
+            // revision and calendar programs take its times; the same plan exported twice keeps it.
+            RotationCalendarIcs.Write(planned.Model, planned.Schedule, clock.GetCurrentInstant(), (int)Math.Max(0, (planned.Plan.Now - Instant.FromUnixTimeTicks(0)).TotalHours)),
+            cancellationToken);
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> CalendarCsv(
+        string siteId, string? now, double? marginPercent, ClaimsPrincipal principal, ICanopyStore store, PlanRunner planner, HttpContext context, CancellationToken cancellationToken) =>
+        Calendar(siteId, new PlanOptions(now, marginPercent), principal, store, planner, context, "rotations.csv", CsvMediaType, planned =>
+            RotationCalendarCsv.Write(planned.Model, planned.Schedule), cancellationToken);
+
+    private static async Task<Results<ContentHttpResult, ProblemHttpResult>> Calendar(
+        string siteId, PlanOptions options, ClaimsPrincipal principal, ICanopyStore store, PlanRunner planner, HttpContext context,
+        string fileName, string mediaType, Func<PlannedSite, string> write, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is not { } site)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        PlannedSite planned = await planner.PlanAsync(site, options, cancellationToken);
+        context.Response.Headers.ContentDisposition = $"attachment; filename=\"{planned.Model.Id}-{fileName}\"";
+        return TypedResults.Text(write(planned), mediaType, Encoding.UTF8);
+    }
+}
