@@ -7,4 +7,7 @@ internal static class AdvicePermissions
 {
     /// <summary>Whether the role may add and delete observations and rotations done (growers and admins).</summary>
     public static bool MayRecordGrowerWork(UserRole role) => role is UserRole.Grower or UserRole.Admin;
+
+    /// <summary>Whether the role may ask for side-lamp proposals (lighting designers and admins: lamps are their sections).</summary>
+    public static bool MayProposeLamps(UserRole role) => role is UserRole.LightingDesigner or UserRole.Admin;
 }

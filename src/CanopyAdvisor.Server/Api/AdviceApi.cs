@@ -41,7 +41,32 @@ internal static class AdviceApi
             .WithSummary("The rotation calendar as CSV (RFC 4180), one row per scheduled turn")
             .WithDescription("Query: now (ISO-8601 with offset; default the start of the current hour), marginPercent (default 20).")
             .Produces<string>(StatusCodes.Status200OK, "text/csv");
+        group.MapPost("/lamps", Lamps)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .Accepts<System.Text.Json.Nodes.JsonObject>("application/json")
+            .WithSummary("Propose side lamps from a brief (lighting designers, admins)")
+            .WithDescription("The body is a side-lamp brief (the brief file format: rails, lamp types named from the site's lampTypes, limits). Query: now, days (1–60, default 7), seed. Answers the proposed lamps with before/after lean, PPFD, DLI, uniformity, energy and cost, and the safety cautions; nothing is stored.")
+            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .ProducesProblem(StatusCodes.Status403Forbidden);
         return routes;
+    }
+
+    private static async Task<Results<Ok<LampsView>, ProblemHttpResult>> Lamps(
+        string siteId, string? now, double? days, int? seed, ClaimsPrincipal principal, HttpContext context, ICanopyStore store, LampsRunner lamps, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is not { } site)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        if (!AdvicePermissions.MayProposeLamps(caller.Role))
+        {
+            return ApiProblems.Forbidden("only lighting designers and admins ask for side-lamp proposals");
+        }
+
+        string brief = await RequestBody.ReadJsonTextAsync(context);
+        return TypedResults.Ok(await lamps.ProposeAsync(site, brief, now, days, seed, cancellationToken));
     }
 
     private static async Task<Results<Ok<PlanView>, ProblemHttpResult>> Plan(

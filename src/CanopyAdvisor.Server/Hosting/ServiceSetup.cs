@@ -44,6 +44,7 @@ internal static class ServiceSetup
         services.AddSingleton<CropCatalogue>();
         services.AddSingleton<ForecastRunner>();
         services.AddSingleton<CanopyAdvisor.Server.Advice.PlanRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.LampsRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
 
