@@ -32,6 +32,9 @@ public interface ICanopyStore : IDisposable
     /// <summary>Rotations done per site.</summary>
     IRotationDoneStore RotationsDone { get; }
 
+    /// <summary>The organisations' crop variants.</summary>
+    ICropVariantStore CropVariants { get; }
+
     /// <summary>Adds an organisation with its first users and sites in one atomic write (used to seed the demo and to
     /// register an organisation).</summary>
     /// <param name="organisation">The organisation.</param>

@@ -10,4 +10,8 @@ internal static class AdvicePermissions
 
     /// <summary>Whether the role may ask for side-lamp proposals (lighting designers and admins: lamps are their sections).</summary>
     public static bool MayProposeLamps(UserRole role) => role is UserRole.LightingDesigner or UserRole.Admin;
+
+    /// <summary>Whether the role may save a calibrated crop variant for the organisation (growers and admins: the lots'
+    /// crops are the growers' section).</summary>
+    public static bool MaySaveVariants(UserRole role) => role is UserRole.Grower or UserRole.Admin;
 }

@@ -45,7 +45,8 @@ internal sealed class LampsRunner(ForecastRunner forecasts)
             throw new InvalidInputException(errors);
         }
 
-        (Site model, _) = await forecasts.LoadAsync(site, cancellationToken);
+        LoadedSite loaded = await forecasts.LoadAsync(site, cancellationToken);
+        Site model = loaded.Model;
         var reader = new SideLampBriefReader(SiteLampTypes.Read(site.Json, baseDirectory: null, ServerBeamFactory.Instance));
         SideLampBrief brief = reader.Parse(briefJson, "brief", model);
         if (seed is int s)
@@ -53,7 +54,7 @@ internal sealed class LampsRunner(ForecastRunner forecasts)
             brief = brief with { Seed = s };
         }
 
-        ForecastRequest request = forecasts.RequestFor(model, start) with
+        ForecastRequest request = ForecastRunner.RequestFor(loaded, start) with
         {
             Horizon = Duration.FromHours(dayCount * 24),
             IncludeUncertainty = false,

@@ -20,7 +20,7 @@ namespace CanopyAdvisor.Server.Advice;
 /// last <see cref="CacheSize"/> plans are kept in memory under the hash of their inputs (the stored site file text, the
 /// crop library and model build, the rotations done, the start and the margin: <see cref="ForecastRunner.HashInputs"/>);
 /// a changed input is a new key.</remarks>
-internal sealed class PlanRunner(ForecastRunner forecasts, CropCatalogue crops, ICanopyStore store)
+internal sealed class PlanRunner(ForecastRunner forecasts)
 {
     /// <summary>How many plans are kept in memory.</summary>
     public const int CacheSize = 32;
@@ -48,9 +48,9 @@ internal sealed class PlanRunner(ForecastRunner forecasts, CropCatalogue crops, 
             throw new InvalidInputException(errors);
         }
 
-        IReadOnlyList<RotationDoneRecord> stored = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
+        LoadedSite loaded = await forecasts.LoadAsync(site, cancellationToken);
         string key = ForecastRunner.HashInputs(
-            site.Json, crops.Version, now, marginPercent, band: false, "plan\n" + ForecastRunner.RotationsDoneText(stored));
+            site.Json, loaded.CropsVersion, now, marginPercent, band: false, "plan\n" + ForecastRunner.RotationsDoneText(loaded.Done));
         lock (_gate)
         {
             if (_cache.TryGetValue(key, out PlannedSite? kept))
@@ -59,7 +59,7 @@ internal sealed class PlanRunner(ForecastRunner forecasts, CropCatalogue crops, 
             }
         }
 
-        (Site model, IReadOnlyList<RotationDoneRecord> done) = await forecasts.LoadAsync(site, cancellationToken);
+        Site model = loaded.Model;
         Instant lastSale = RotationPlanning.LastSale(model);
         if (lastSale <= now + Duration.FromHours(1))
         {
@@ -67,11 +67,11 @@ internal sealed class PlanRunner(ForecastRunner forecasts, CropCatalogue crops, 
         }
 
         (Duration horizon, _) = RotationPlanning.HorizonToSales(model, now, Duration.Zero);
-        ForecastRequest request = forecasts.RequestFor(model, now) with { Horizon = horizon };
+        ForecastRequest request = ForecastRunner.RequestFor(loaded, now) with { Horizon = horizon };
         RotationPolicyOptions policy = RotationPolicyOptions.Default with { Margin = marginPercent / 100 };
         (RotationPlan plan, LabourSchedule schedule) = await Task.Run(
             () => RotationPlanning.PlanAndSchedule(request, policy, progress: null, cancellationToken), cancellationToken);
-        var planned = new PlannedSite(model, plan, schedule, done.Count);
+        var planned = new PlannedSite(model, plan, schedule, loaded.Done.Count);
         lock (_gate)
         {
             if (_cache.TryAdd(key, planned))

@@ -48,7 +48,60 @@ internal static class AdviceApi
             .WithDescription("The body is a side-lamp brief (the brief file format: rails, lamp types named from the site's lampTypes, limits). Query: now, days (1–60, default 7), seed. Answers the proposed lamps with before/after lean, PPFD, DLI, uniformity, energy and cost, and the safety cautions; nothing is stored.")
             .ProducesProblem(StatusCodes.Status400BadRequest)
             .ProducesProblem(StatusCodes.Status403Forbidden);
+        group.MapPost("/calibration", Calibrate)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("Fit a crop's lean parameters (M, γ, B) to the site's stored observations")
+            .WithDescription("Answers estimates ± standard errors, their correlation, warnings, residuals and whether the data identify the parameters. With \"save\": true (growers, admins) an identified variant is saved to the organisation's crops (201, then listed by GET /api/crops); data that cannot identify the parameters answer 422 with the warnings and nothing is saved.")
+            .ProducesProblem(StatusCodes.Status400BadRequest)
+            .ProducesProblem(StatusCodes.Status409Conflict)
+            .ProducesProblem(StatusCodes.Status422UnprocessableEntity);
         return routes;
+    }
+
+    private static async Task<Results<Ok<CalibrationView>, Created<CalibrationView>, ProblemHttpResult>> Calibrate(
+        string siteId, JsonBody<CalibrationRequest> body, ClaimsPrincipal principal, ICanopyStore store, CalibrationRunner calibration, IClock clock, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is not { } site)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        bool save = body.Value.Save ?? false;
+        if (save && !AdvicePermissions.MaySaveVariants(caller.Role))
+        {
+            return ApiProblems.Forbidden("only growers and admins save crop variants; ask without \"save\" to see the fit");
+        }
+
+        CalibrationOutcome outcome = await calibration.FitAsync(site, body.Value, cancellationToken);
+        if (!save)
+        {
+            return TypedResults.Ok(outcome.View);
+        }
+
+        if (!outcome.Result.Identified)
+        {
+            return TypedResults.Problem(ApiProblems.Create(
+                StatusCodes.Status422UnprocessableEntity,
+                "The observations cannot identify the parameters",
+                "the variant was not saved; see the warnings (more observations, over a longer time or of benches lit differently, help)",
+                outcome.Result.Warnings.Select(w => new ProblemError("observations", w))));
+        }
+
+        Core.Plants.Crop variant = outcome.Result.Variant;
+        if (outcome.BaseCrop.Id == variant.Id || Files.Crops.CropLibrary.BuiltInIds.Contains(variant.Id, StringComparer.Ordinal))
+        {
+            return ApiProblems.Conflict($"'{variant.Id}' is a crop of the built-in library; give another variantId");
+        }
+
+        string toml = Files.Crops.CropVariantWriter.Write(variant, outcome.BaseCrop, outcome.CommentLines);
+        var record = new CropVariantRecord(caller.OrganisationId, variant.Id, outcome.BaseCrop.Id, variant.Name, toml, site.Id, clock.GetCurrentInstant(), caller.UserId);
+        if (await store.CropVariants.AddAsync(record, cancellationToken) != WriteOutcome.Written)
+        {
+            return ApiProblems.Conflict($"your organisation already has a crop variant '{variant.Id}'; give another variantId");
+        }
+
+        return TypedResults.Created($"/api/crops/{variant.Id}", outcome.View with { Saved = true });
     }
 
     private static async Task<Results<Ok<LampsView>, ProblemHttpResult>> Lamps(

@@ -8,6 +8,7 @@ using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Sites;
 using CanopyAdvisor.Server.Accounts;
 using CanopyAdvisor.Server.Contracts;
@@ -55,20 +56,15 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         }
 
         bool band = options.IncludeBand ?? true;
-        IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
-        string hash = HashInputs(site.Json, crops.Version, now, days, band, RotationsDoneText(done));
+        LoadedSite loaded = await LoadAsync(site, cancellationToken);
+        string hash = HashInputs(site.Json, loaded.CropsVersion, now, days, band, RotationsDoneText(loaded.Done));
         if (await store.Forecasts.FindByHashAsync(site.OrganisationId, site.Id, hash, cancellationToken) is { } stored)
         {
             return (stored, true);
         }
 
-        Site model = WithRotationsDone(new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null), done);
-        if (model.Lots.IsDefaultOrEmpty)
-        {
-            throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
-        }
-
-        ForecastRequest request = RequestFor(model, now) with
+        Site model = loaded.Model;
+        ForecastRequest request = RequestFor(loaded, now) with
         {
             Horizon = Duration.FromHours(days * 24),
             IncludeUncertainty = band,
@@ -106,9 +102,10 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         return now;
     }
 
-    /// <summary>The stored site as the model, with its stored rotations done applied to the lots.</summary>
-    /// <exception cref="InvalidInputException">The site has no lots.</exception>
-    public async Task<(Site Model, IReadOnlyList<RotationDoneRecord> Done)> LoadAsync(SiteRecord site, CancellationToken cancellationToken)
+    /// <summary>The stored site as the model, with its stored rotations done applied to the lots, and its organisation's
+    /// crop library.</summary>
+    /// <exception cref="InvalidInputException">The site has no lots, or a stored variant does not read.</exception>
+    public async Task<LoadedSite> LoadAsync(SiteRecord site, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(site);
         IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
@@ -118,18 +115,20 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
         }
 
-        return (model, done);
+        (CropLibrary library, string version) = crops.ForOrganisation(await store.CropVariants.ListAsync(site.OrganisationId, cancellationToken));
+        return new LoadedSite(model, done, library, version);
     }
 
     /// <summary>The forecast request of a site from a start, as the <c>canopy forecast</c> command builds it: the library's
     /// crops of its lots, clear sky × the site's clearness, the site's temperature setpoints; default horizon, band on.</summary>
-    public ForecastRequest RequestFor(Site model, Instant now)
+    public static ForecastRequest RequestFor(LoadedSite loaded, Instant now)
     {
-        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(loaded);
+        Site model = loaded.Model;
         var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
         foreach (Lot lot in model.Lots.IsDefault ? [] : model.Lots)
         {
-            if (crops.Library.TryGet(lot.CropId, out Crop? crop))
+            if (loaded.Crops.TryGet(lot.CropId, out Crop? crop))
             {
                 cropsById[lot.CropId] = crop;
             }

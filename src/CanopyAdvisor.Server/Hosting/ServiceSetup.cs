@@ -45,6 +45,7 @@ internal static class ServiceSetup
         services.AddSingleton<ForecastRunner>();
         services.AddSingleton<CanopyAdvisor.Server.Advice.PlanRunner>();
         services.AddSingleton<CanopyAdvisor.Server.Advice.LampsRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.CalibrationRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
 

@@ -67,6 +67,7 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         ForecastCollection = _db.GetCollection<ForecastDocument>("forecasts");
         ObservationCollection = _db.GetCollection<ObservationDocument>("observations");
         RotationDoneCollection = _db.GetCollection<RotationDoneDocument>("rotationsDone");
+        CropVariantCollection = _db.GetCollection<CropVariantDocument>("cropVariants");
 
         UserCollection.EnsureIndex(u => u.Email, unique: true);
         UserCollection.EnsureIndex(u => u.OrganisationId);
@@ -78,6 +79,7 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         ForecastCollection.EnsureIndex(f => f.SiteId);
         ObservationCollection.EnsureIndex(o => o.SiteId);
         RotationDoneCollection.EnsureIndex(r => r.SiteId);
+        CropVariantCollection.EnsureIndex(v => v.OrganisationId);
 
         Organisations = new OrganisationRepository(this);
         Users = new UserRepository(this);
@@ -86,6 +88,7 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         Forecasts = new ForecastRepository(this);
         Observations = new ObservationRepository(this);
         RotationsDone = new RotationDoneRepository(this);
+        CropVariants = new CropVariantRepository(this);
     }
 
     /// <inheritdoc />
@@ -109,6 +112,9 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     /// <inheritdoc />
     public IRotationDoneStore RotationsDone { get; }
 
+    /// <inheritdoc />
+    public ICropVariantStore CropVariants { get; }
+
     internal ILiteCollection<OrganisationDocument> OrganisationCollection { get; }
 
     internal ILiteCollection<UserDocument> UserCollection { get; }
@@ -122,6 +128,8 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     internal ILiteCollection<ObservationDocument> ObservationCollection { get; }
 
     internal ILiteCollection<RotationDoneDocument> RotationDoneCollection { get; }
+
+    internal ILiteCollection<CropVariantDocument> CropVariantCollection { get; }
 
     /// <inheritdoc />
     public Task<WriteOutcome> AddOrganisationAsync(
