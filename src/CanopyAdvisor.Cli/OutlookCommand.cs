@@ -67,13 +67,6 @@ internal static class OutlookCommand
             }
 
             var request = new ForecastRequest(site, loaded.Crops, loaded.Outside, loaded.Temperature, loaded.Now);
-            ForecastSession session = ForecastSession.Prepare(request);
-            SiteForecast forecast = session.Run(new ProgressReporter(error, "forecasting", interactive));
-            LocalDate first = forecast.Now.InZone(site.Zone).Date;
-            LocalDate last = (forecast.HorizonEnd - Duration.Epsilon).InZone(site.Zone).Date;
-            LightPeriodSummary light = LightSimulation.Run(
-                session.Field, loaded.Outside, first, last, progress: new ProgressReporter(error, "daily light", interactive));
-
             var notes = new List<string>
             {
                 $"Daylight: {DaylightSource.Describe(site, loaded.WeatherPath)}; air: {ForecastInputs.DescribeTemperatures(site, loaded.TemperaturePath)}.",
@@ -83,22 +76,11 @@ internal static class OutlookCommand
                 notes.Add(char.ToUpperInvariant(remark[0]) + remark[1..] + ".");
             }
 
-            // The rotation advice to each lot's sale, and its turns on the site's crews.
-            (Duration planHorizon, _) = RotationPlanning.HorizonToSales(site, loaded.Now, request.Horizon);
-            (RotationPlan plan, LabourSchedule schedule) = RotationPlanning.PlanAndSchedule(
-                request with { Horizon = planHorizon }, RotationPolicyOptions.Default, new ProgressReporter(error, "rotation plan", interactive));
-            (ImmutableArray<BenchAdviceSummary> advice, double rotationHours) = OutlookAdvice.From(plan, schedule, forecast.Now, forecast.HorizonEnd);
-            notes.Add(string.Create(
-                System.Globalization.CultureInfo.InvariantCulture,
-                $"Rotation: the least turning that keeps each bench's lean at least {ModelConstants.RotationGradeMargin * 100:0} % under its grade limit to the sale, scheduled on the site's crews (rotations.ics); the lean figures assume nobody turns the pots."));
-
-            OutlookReport report = OutlookReport.Build(new OutlookInput(site, forecast, loaded.Crops, BenchDayDli.From(light))
-            {
-                Previous = earlier.Snapshot,
-                Notes = notes,
-                Advice = advice,
-                RotationHoursThisWeek = rotationHours,
-            });
+            (OutlookReport report, LabourSchedule schedule) = OutlookComputation.Compute(
+                request,
+                notes,
+                earlier.Snapshot,
+                (new ProgressReporter(error, "forecasting", interactive), new ProgressReporter(error, "daily light", interactive), new ProgressReporter(error, "rotation plan", interactive)));
 
             Directory.CreateDirectory(folder);
             string[] written = OutputFiles.WriteAll(folder, new Dictionary<string, string>(StringComparer.Ordinal)

@@ -55,7 +55,43 @@ internal static class AdviceApi
             .ProducesProblem(StatusCodes.Status400BadRequest)
             .ProducesProblem(StatusCodes.Status409Conflict)
             .ProducesProblem(StatusCodes.Status422UnprocessableEntity);
+        group.MapGet("/outlook", OutlookPageAsync)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("The week's outlook as a printable page (HTML)")
+            .WithDescription("Floor map, benches ranked by risk, lean and DLI charts, each bench's rotation advice. Query: now (ISO-8601 with offset; default the start of the current hour), days (1–14, default 7).")
+            .Produces<string>(StatusCodes.Status200OK, "text/html");
+        group.MapGet("/outlook.csv", OutlookCsvAsync)
+            .RequireRateLimiting(RateLimits.ForecastPolicy)
+            .WithSummary("The week's outlook as CSV (RFC 4180), one row per bench")
+            .Produces<string>(StatusCodes.Status200OK, "text/csv");
         return routes;
+    }
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> OutlookPageAsync(
+        string siteId, string? now, double? days, ClaimsPrincipal principal, ICanopyStore store, OutlookRunner outlook, CancellationToken cancellationToken) =>
+        Outlook(siteId, now, days, principal, store, outlook, r => TypedResults.Text(Reports.Outlook.OutlookPage.Render(r), "text/html; charset=utf-8", Encoding.UTF8), null, cancellationToken);
+
+    private static Task<Results<ContentHttpResult, ProblemHttpResult>> OutlookCsvAsync(
+        string siteId, string? now, double? days, ClaimsPrincipal principal, ICanopyStore store, OutlookRunner outlook, HttpContext context, CancellationToken cancellationToken) =>
+        Outlook(siteId, now, days, principal, store, outlook, r => TypedResults.Text(Reports.Outlook.OutlookCsv.Write(r), CsvMediaType, Encoding.UTF8), context, cancellationToken);
+
+    private static async Task<Results<ContentHttpResult, ProblemHttpResult>> Outlook(
+        string siteId, string? now, double? days, ClaimsPrincipal principal, ICanopyStore store, OutlookRunner outlook,
+        Func<Reports.Outlook.OutlookReport, ContentHttpResult> write, HttpContext? download, CancellationToken cancellationToken)
+    {
+        Caller caller = Caller.From(principal);
+        if (await store.Sites.GetAsync(caller.OrganisationId, siteId, cancellationToken) is not { } site)
+        {
+            return ApiProblems.NotFound("site");
+        }
+
+        Reports.Outlook.OutlookReport report = await outlook.OutlookAsync(site, now, days, cancellationToken);
+        if (download is not null)
+        {
+            download.Response.Headers.ContentDisposition = $"attachment; filename=\"{site.SiteKey}-outlook.csv\"";
+        }
+
+        return write(report);
     }
 
     private static async Task<Results<Ok<CalibrationView>, Created<CalibrationView>, ProblemHttpResult>> Calibrate(

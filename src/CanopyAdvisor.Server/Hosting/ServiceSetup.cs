@@ -46,6 +46,7 @@ internal static class ServiceSetup
         services.AddSingleton<CanopyAdvisor.Server.Advice.PlanRunner>();
         services.AddSingleton<CanopyAdvisor.Server.Advice.LampsRunner>();
         services.AddSingleton<CanopyAdvisor.Server.Advice.CalibrationRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.OutlookRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
 
