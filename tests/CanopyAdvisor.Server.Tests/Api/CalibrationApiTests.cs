@@ -99,6 +99,22 @@ public sealed class CalibrationApiTests(CanopyFactory factory) : IClassFixture<C
         await ProblemAssert.IsProblem(
             await grower.PostAsync($"/api/sites/{siteId}/calibration", SiteEditing.Json("""{"save": true, "variantId": "petunia-south-demo"}""")), HttpStatusCode.Conflict);
         Assert.Equal(ids, await CropIdsAsync(grower));
+
+        // A lot may name the variant: the forecast reads it from the organisation's crops.
+        (System.Text.Json.Nodes.JsonObject siteFile, int version) = await SiteEditing.ReadAsync(grower, siteId);
+        var lot = siteFile["lots"]!.AsArray().Single(l => l!["benchId"]!.GetValue<string>() == "south-1")!;
+        lot["crop"] = "petunia-south-demo";
+        Assert.Equal(HttpStatusCode.OK, (await SiteEditing.ReplaceAsync(grower, siteId, siteFile, version)).StatusCode);
+        HttpResponseMessage forecast = await grower.PostAsync(
+            $"/api/sites/{siteId}/forecasts", SiteEditing.Json("""{"now": "2026-12-02T09:00:00+01:00", "days": 1, "includeBand": false}"""));
+        JsonElement forecastView = await forecast.Content.ReadFromJsonAsync<JsonElement>();
+        Assert.True(forecast.StatusCode == HttpStatusCode.Created, forecastView.GetRawText());
+        Assert.Equal("petunia-south-demo", forecastView.GetProperty("benches").EnumerateArray().Single(b => b.GetProperty("benchId").GetString() == "south-1").GetProperty("cropId").GetString());
+
+        // Put the lot back on the library crop for the other tests of this class.
+        (siteFile, version) = await SiteEditing.ReadAsync(grower, siteId);
+        siteFile["lots"]!.AsArray().Single(l => l!["benchId"]!.GetValue<string>() == "south-1")!["crop"] = "petunia";
+        Assert.Equal(HttpStatusCode.OK, (await SiteEditing.ReplaceAsync(grower, siteId, siteFile, version)).StatusCode);
     }
 
     [Theory]
