@@ -18,17 +18,6 @@ namespace CanopyAdvisor.Cli;
 /// <summary><c>canopy calibrate</c>: fits a crop's M, γ (and B) to measured lean and saves a site variant of the crop.</summary>
 internal static class CalibrateCommand
 {
-    private static readonly Dictionary<string, string> ParameterNames = new(StringComparer.OrdinalIgnoreCase)
-    {
-        ["M"] = "photoCoefficient",
-        ["photoCoefficient"] = "photoCoefficient",
-        ["gamma"] = "proprioceptiveSensitivity",
-        ["γ"] = "proprioceptiveSensitivity",
-        ["proprioceptiveSensitivity"] = "proprioceptiveSensitivity",
-        ["B"] = "balanceNumber",
-        ["balanceNumber"] = "balanceNumber",
-    };
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive)
     {
         var site = new Argument<string>("site") { Description = "Site file (JSON) with lots, or demo:NAME for a built-in demo site." };
@@ -61,7 +50,7 @@ internal static class CalibrateCommand
             ImmutableArray<LeanObservation> measured = LoadObservations(parse.GetValue(observations)!);
             Instant start = parse.GetValue(now) is string nowText
                 ? TimeArguments.ParseOffsetDateTime(nowText, "--now").ToInstant()
-                : DefaultNow(model, measured);
+                : CalibrationInputs.DefaultNow(model, measured);
 
             string? outText = parse.GetValue(outPath);
             string? variantId = null;
@@ -133,40 +122,8 @@ internal static class CalibrateCommand
         return command;
     }
 
-    /// <summary>The last observation, or noon of the latest height measurement of an observed bench's lot when that is
-    /// later (a forecast cannot start before the lot's height was measured).</summary>
-    private static Instant DefaultNow(Site site, ImmutableArray<LeanObservation> measured)
-    {
-        Instant last = measured.Max(o => o.At);
-        var benches = new HashSet<string>(measured.Select(o => o.BenchId), StringComparer.Ordinal);
-        foreach (Lot lot in site.Lots.IsDefault ? [] : site.Lots)
-        {
-            if (lot is not null && benches.Contains(lot.BenchId))
-            {
-                Instant heightMeasured = lot.MeasuredOn.At(new LocalTime(12, 0)).InZoneLeniently(site.Zone).ToInstant();
-                last = heightMeasured > last ? heightMeasured : last;
-            }
-        }
-
-        return last;
-    }
-
-    private static ImmutableArray<string> ParseParameters(string text)
-    {
-        string[] names = [.. text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries)];
-        var keys = new List<string>();
-        foreach (string name in names)
-        {
-            if (!ParameterNames.TryGetValue(name, out string? key))
-            {
-                throw new InvalidInputException("--params", $"'{name}' is not a parameter to fit; use M, gamma and B (or photoCoefficient, proprioceptiveSensitivity, balanceNumber)");
-            }
-
-            keys.Add(key);
-        }
-
-        return keys.Count == 0 ? throw new InvalidInputException("--params", "name at least one of M, gamma, B") : [.. keys];
-    }
+    private static ImmutableArray<string> ParseParameters(string text) =>
+        CalibrationInputs.ParameterKeys(text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries), "--params");
 
     private static ImmutableArray<LeanObservation> LoadObservations(string argument)
     {

@@ -16,9 +16,6 @@ namespace CanopyAdvisor.Cli;
 /// sale, and the list of rotation tasks.</summary>
 internal static class PlanCommand
 {
-    /// <summary>The longest forecast a plan can be checked over, 366 days (<c>ForecastRequest.Horizon</c>).</summary>
-    private static readonly Duration LongestHorizon = Duration.FromDays(366);
-
     public static Command Create(TextWriter output, TextWriter error, bool interactive, IClock clock)
     {
         var inputs = new ForecastInputs();
@@ -45,28 +42,20 @@ internal static class PlanCommand
             ForecastInputs.Loaded loaded = inputs.Load(parse, clock, error);
             Instant start = loaded.Now;
             Site model = loaded.Site;
-            Instant lastSale = model.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(model.Zone).ToInstant());
-            if (lastSale <= start + Duration.FromHours(1))
+            if (RotationPlanning.LastSale(model) <= start + Duration.FromHours(1))
             {
-                throw new InvalidInputException("lots", $"every lot is sold by {ForecastInputs.FormatLocal(lastSale, model.Zone)}; nothing to plan after {ForecastInputs.FormatLocal(start, model.Zone)}");
+                throw new InvalidInputException("lots", $"every lot is sold by {ForecastInputs.FormatLocal(RotationPlanning.LastSale(model), model.Zone)}; nothing to plan after {ForecastInputs.FormatLocal(start, model.Zone)}");
             }
 
-            Duration horizon = lastSale - start;
-            if (horizon > LongestHorizon)
+            (Duration horizon, bool capped) = RotationPlanning.HorizonToSales(model, start, Duration.Zero);
+            if (capped)
             {
-                horizon = LongestHorizon;
                 error.WriteLine($"note: sales after {ForecastInputs.FormatLocal(start + horizon, model.Zone)} are checked only to then (a forecast reaches 366 days at most)");
             }
 
-            var request = new ForecastRequest(model, loaded.Crops, loaded.Outside, loaded.Temperature, start)
-            {
-                Horizon = horizon,
-                IncludeUncertainty = false,
-            };
-            ForecastSession session = ForecastSession.Prepare(request);
+            var request = new ForecastRequest(model, loaded.Crops, loaded.Outside, loaded.Temperature, start) { Horizon = horizon };
             var progress = new ProgressReporter(error, "planning", interactive);
-            RotationPlan plan = RotationPolicyPlanner.Plan(session, RotationPolicyOptions.Default with { Margin = marginPercent / 100 }, progress);
-            LabourSchedule schedule = RotationCalendar.Schedule(model, plan);
+            (RotationPlan plan, LabourSchedule schedule) = RotationPlanning.PlanAndSchedule(request, RotationPolicyOptions.Default with { Margin = marginPercent / 100 }, progress);
             if (parse.GetValue(ics) is string icsPath)
             {
                 OutputFiles.WriteWhole(icsPath, RotationCalendarIcs.Write(model, schedule, clock.GetCurrentInstant()));

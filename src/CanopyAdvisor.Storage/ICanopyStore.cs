@@ -29,6 +29,15 @@ public interface ICanopyStore : IDisposable
     /// <summary>The history of scheduled job runs.</summary>
     IJobRunStore JobRuns { get; }
 
+    /// <summary>Observations (measured leans) per site.</summary>
+    IObservationStore Observations { get; }
+
+    /// <summary>Rotations done per site.</summary>
+    IRotationDoneStore RotationsDone { get; }
+
+    /// <summary>The organisations' crop variants.</summary>
+    ICropVariantStore CropVariants { get; }
+
     /// <summary>Adds an organisation with its first users and sites in one atomic write (used to seed the demo and to
     /// register an organisation).</summary>
     /// <param name="organisation">The organisation.</param>

@@ -72,6 +72,17 @@ public sealed class CropLibrary
         return Build(ReadBuiltInFiles(), userFiles, errors);
     }
 
+    /// <summary>Loads the built-in crops plus crop files given as text (e.g. an organisation's stored variants), checked
+    /// as user files are.</summary>
+    /// <param name="files">Each file's crop id (its file name without <c>.toml</c>) and TOML text, in order.</param>
+    /// <returns>The library.</returns>
+    /// <exception cref="InvalidInputException">Any problem in any file: every problem at once.</exception>
+    public static CropLibrary LoadBuiltInWith(IEnumerable<KeyValuePair<string, string>> files)
+    {
+        ArgumentNullException.ThrowIfNull(files);
+        return Build(ReadBuiltInFiles(), [.. files.Select(f => new CropSourceFile(f.Key + ".toml", f.Value))]);
+    }
+
     /// <summary>Loads the built-in crops only.</summary>
     /// <returns>The library.</returns>
     public static CropLibrary LoadBuiltIn() => Load([]);

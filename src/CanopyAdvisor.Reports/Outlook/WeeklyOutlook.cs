@@ -17,8 +17,6 @@ namespace CanopyAdvisor.Reports.Outlook;
 public static class WeeklyOutlook
 {
     /// <summary>The longest rotation plan checked, 366 days (<c>ForecastRequest.Horizon</c>).</summary>
-    private static readonly Duration MaximumPlanHorizon = Duration.FromDays(366);
-
     /// <summary>Builds the outlook.</summary>
     /// <param name="request">The week's forecast request (its horizon is the outlook's week).</param>
     /// <param name="earlier">Last week's outlook, resolved (<see cref="PreviousOutlook.Resolve"/>).</param>
@@ -39,44 +37,24 @@ public static class WeeklyOutlook
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(earlier);
         ArgumentNullException.ThrowIfNull(leadingNotes);
-        Site site = request.Site;
-        ForecastSession session = ForecastSession.Prepare(request);
-        SiteForecast forecast = session.Run(progress?.Invoke("forecasting"), cancellationToken);
-        LocalDate first = forecast.Now.InZone(site.Zone).Date;
-        LocalDate last = (forecast.HorizonEnd - Duration.Epsilon).InZone(site.Zone).Date;
-        LightPeriodSummary light = LightSimulation.Run(session.Field, request.OutsideLight, first, last, progress: progress?.Invoke("daily light"), cancellationToken: cancellationToken);
-
         var notes = new List<string>(leadingNotes);
         if (earlier.Note is string remark)
         {
             notes.Add(char.ToUpperInvariant(remark[0]) + remark[1..] + ".");
         }
 
-        // The rotation advice to each lot's sale, and its turns on the site's crews.
-        Instant lastSale = site.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(site.Zone).ToInstant());
-        Duration toSale = lastSale - request.Now;
-        Duration planHorizon = toSale > MaximumPlanHorizon ? MaximumPlanHorizon : toSale < request.Horizon ? request.Horizon : toSale;
-        ForecastSession planning = ForecastSession.Prepare(request with { Horizon = planHorizon, IncludeUncertainty = false });
-        RotationPlan plan = RotationPolicyPlanner.Plan(planning, RotationPolicyOptions.Default, progress?.Invoke("rotation plan"), cancellationToken);
-        LabourSchedule schedule = RotationCalendar.Schedule(site, plan);
-        (System.Collections.Immutable.ImmutableArray<BenchAdviceSummary> advice, double rotationHours) = OutlookAdvice.From(plan, schedule, forecast.Now, forecast.HorizonEnd);
-        notes.Add(string.Create(
-            CultureInfo.InvariantCulture,
-            $"Rotation: the least turning that keeps each bench's lean at least {ModelConstants.RotationGradeMargin * 100:0} % under its grade limit to the sale, scheduled on the site's crews (rotations.ics); the lean figures assume nobody turns the pots."));
-
-        OutlookReport report = OutlookReport.Build(new OutlookInput(site, forecast, request.Crops, BenchDayDli.From(light))
-        {
-            Previous = earlier.Snapshot,
-            Notes = notes,
-            Advice = advice,
-            RotationHoursThisWeek = rotationHours,
-        });
+        (OutlookReport report, LabourSchedule schedule) = OutlookComputation.Compute(
+            request,
+            notes,
+            earlier.Snapshot,
+            (progress?.Invoke("forecasting"), progress?.Invoke("daily light"), progress?.Invoke("rotation plan")),
+            cancellationToken);
         return new WeeklyOutlookFiles(
             report,
             schedule,
             OutlookPage.Render(report),
             OutlookCsv.Write(report),
             OutlookSnapshotJson.Write(OutlookSnapshot.From(report)),
-            RotationCalendarIcs.Write(site, schedule, writtenAt));
+            RotationCalendarIcs.Write(request.Site, schedule, writtenAt));
     }
 }

@@ -4,6 +4,7 @@ using System.Text.Json;
 using CanopyAdvisor.Core.Plants;
 using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Server.Contracts;
+using CanopyAdvisor.Storage;
 
 namespace CanopyAdvisor.Server.Forecasting;
 
@@ -27,6 +28,51 @@ internal sealed class CropCatalogue
 
     /// <summary>Lower-case hex SHA-256 of <see cref="Views"/> as JSON.</summary>
     public string Version { get; }
+
+    /// <summary>The library of an organisation: the built-in crops plus its stored variants, and its version (the built-in
+    /// <see cref="Version"/> when it has none, else the SHA-256 of that version and every variant's id and text), so a
+    /// forecast made before a variant changed never matches one made after. The last few libraries are kept.</summary>
+    /// <exception cref="Core.Validation.InvalidInputException">A stored variant no longer reads against the library.</exception>
+    public (CropLibrary Library, string Version) ForOrganisation(IReadOnlyList<CropVariantRecord> variants)
+    {
+        ArgumentNullException.ThrowIfNull(variants);
+        if (variants.Count == 0)
+        {
+            return (Library, Version);
+        }
+
+        var text = new StringBuilder(Version).Append('\n');
+        foreach (CropVariantRecord v in variants.OrderBy(v => v.CropId, StringComparer.Ordinal))
+        {
+            text.Append(v.CropId).Append(' ').Append(v.Toml.Length).Append('\n').Append(v.Toml).Append('\n');
+        }
+
+        string version = Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text.ToString())));
+        lock (_gate)
+        {
+            if (_libraries.TryGetValue(version, out CropLibrary? kept))
+            {
+                return (kept, version);
+            }
+        }
+
+        CropLibrary library = CropLibrary.LoadBuiltInWith(variants.Select(v => KeyValuePair.Create(v.CropId, v.Toml)));
+        lock (_gate)
+        {
+            if (_libraries.Count >= 64)
+            {
+                _libraries.Clear();
+            }
+
+            _libraries[version] = library;
+        }
+
+        return (library, version);
+    }
+
+    private readonly Lock _gate = new();
+
+    private readonly Dictionary<string, CropLibrary> _libraries = new(StringComparer.Ordinal);
 
     /// <summary>The view of one crop.</summary>
     public static CropView ToView(Crop crop)

@@ -8,6 +8,7 @@ using CanopyAdvisor.Core.Plants.Growth;
 using CanopyAdvisor.Core.Sites;
 using CanopyAdvisor.Core.Sky;
 using CanopyAdvisor.Core.Validation;
+using CanopyAdvisor.Files.Crops;
 using CanopyAdvisor.Files.Sites;
 using CanopyAdvisor.Server.Accounts;
 using CanopyAdvisor.Server.Contracts;
@@ -23,7 +24,8 @@ namespace CanopyAdvisor.Server.Forecasting;
 /// served from the store.</summary>
 /// <remarks>The inputs hashed: the stored site file text, the crop library version (<see cref="CropCatalogue.Version"/>),
 /// the model build (the module version id of CanopyAdvisor.Core, which deterministic builds derive from its content),
-/// the start instant, the horizon and whether the band is included. Nothing else feeds the forecast.</remarks>
+/// the start instant, the horizon, whether the band is included, and the stored rotations done (applied to the lots).
+/// Nothing else feeds the forecast.</remarks>
 internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IClock clock, IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions> json)
 {
     /// <summary>The default horizon, days.</summary>
@@ -40,20 +42,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
     public async Task<(ForecastRecord Record, bool FromStore)> GetOrRunAsync(SiteRecord site, ForecastOptions options, Caller caller, CancellationToken cancellationToken)
     {
         var errors = new List<ValidationError>();
-        Instant now = clock.GetCurrentInstant();
-        now = Instant.FromUnixTimeTicks(now.ToUnixTimeTicks() - (now.ToUnixTimeTicks() % NodaConstants.TicksPerHour));
-        if (options.Now is not null)
-        {
-            ParseResult<OffsetDateTime> parsed = NowPattern.Parse(options.Now);
-            if (parsed.Success)
-            {
-                now = parsed.Value.ToInstant();
-            }
-            else
-            {
-                errors.Add(new ValidationError("now", "must be an ISO-8601 date and time with an offset, e.g. 2026-12-02T09:00:00+01:00"));
-            }
-        }
+        Instant now = StartOf(options.Now, errors);
 
         double days = options.Days ?? DefaultDays;
         if (!(days > 0 && days <= 366))
@@ -67,13 +56,19 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         }
 
         bool band = options.IncludeBand ?? true;
-        string hash = HashInputs(site.Json, crops.Version, now, days, band);
+        LoadedSite loaded = await LoadAsync(site, cancellationToken);
+        string hash = HashInputs(site.Json, loaded.CropsVersion, now, days, band, RotationsDoneText(loaded.Done));
         if (await store.Forecasts.FindByHashAsync(site.OrganisationId, site.Id, hash, cancellationToken) is { } stored)
         {
             return (stored, true);
         }
 
-        (Site model, ForecastRequest request) = BuildRequest(site, now, days, band);
+        Site model = loaded.Model;
+        ForecastRequest request = RequestFor(loaded, now) with
+        {
+            Horizon = Duration.FromHours(days * 24),
+            IncludeUncertainty = band,
+        };
 
         // Validation inside Prepare throws InvalidInputException (unknown crops, lots on unknown benches): a 400, nothing stored.
         SiteForecast forecast = await Task.Run(() => ForecastSession.Prepare(request).Run(cancellationToken: cancellationToken), cancellationToken);
@@ -85,38 +80,81 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         return (kept, kept.Id != id);
     }
 
-    /// <summary>The forecast request of a stored site as this service runs it: the site file, the crop library, clear sky
-    /// × the site's clearness, the site's temperature setpoints.</summary>
-    /// <exception cref="InvalidInputException">The site has no lots.</exception>
-    public (Site Model, ForecastRequest Request) BuildRequest(SiteRecord site, Instant now, double days, bool band)
+    /// <summary>The forecast request of a stored site as this service runs it (the organisation's crop variants, the
+    /// rotations done), over <paramref name="days"/> from <paramref name="now"/>; for the scheduled jobs.</summary>
+    /// <exception cref="InvalidInputException">The site cannot be forecast (no lots, unknown crops).</exception>
+    public async Task<(Site Model, ForecastRequest Request)> BuildRequestAsync(SiteRecord site, Instant now, double days, bool band, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(site);
-        Site model = new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null);
+        LoadedSite loaded = await LoadAsync(site, cancellationToken);
+        ForecastRequest request = RequestFor(loaded, now) with
+        {
+            Horizon = Duration.FromHours(days * 24),
+            IncludeUncertainty = band,
+        };
+        return (loaded.Model, request);
+    }
+
+    /// <summary>The start of a forecast or plan: the ISO-8601 time given (with an offset), or the start of the current
+    /// hour; a bad time adds an error at <c>now</c>.</summary>
+    public Instant StartOf(string? text, List<ValidationError> errors)
+    {
+        ArgumentNullException.ThrowIfNull(errors);
+        Instant now = clock.GetCurrentInstant();
+        now = Instant.FromUnixTimeTicks(now.ToUnixTimeTicks() - (now.ToUnixTimeTicks() % NodaConstants.TicksPerHour));
+        if (text is null)
+        {
+            return now;
+        }
+
+        ParseResult<OffsetDateTime> parsed = NowPattern.Parse(text);
+        if (parsed.Success)
+        {
+            return parsed.Value.ToInstant();
+        }
+
+        errors.Add(new ValidationError("now", "must be an ISO-8601 date and time with an offset, e.g. 2026-12-02T09:00:00+01:00"));
+        return now;
+    }
+
+    /// <summary>The stored site as the model, with its stored rotations done applied to the lots, and its organisation's
+    /// crop library.</summary>
+    /// <exception cref="InvalidInputException">The site has no lots, or a stored variant does not read.</exception>
+    public async Task<LoadedSite> LoadAsync(SiteRecord site, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(site);
+        IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
+        Site model = WithRotationsDone(new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null), done);
         if (model.Lots.IsDefaultOrEmpty)
         {
             throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
         }
 
+        (CropLibrary library, string version) = crops.ForOrganisation(await store.CropVariants.ListAsync(site.OrganisationId, cancellationToken));
+        return new LoadedSite(model, done, library, version);
+    }
+
+    /// <summary>The forecast request of a site from a start, as the <c>canopy forecast</c> command builds it: the library's
+    /// crops of its lots, clear sky × the site's clearness, the site's temperature setpoints; default horizon, band on.</summary>
+    public static ForecastRequest RequestFor(LoadedSite loaded, Instant now)
+    {
+        ArgumentNullException.ThrowIfNull(loaded);
+        Site model = loaded.Model;
         var cropsById = new Dictionary<string, Crop>(StringComparer.Ordinal);
-        foreach (Lot lot in model.Lots)
+        foreach (Lot lot in model.Lots.IsDefault ? [] : model.Lots)
         {
-            if (crops.Library.TryGet(lot.CropId, out Crop? crop))
+            if (loaded.Crops.TryGet(lot.CropId, out Crop? crop))
             {
                 cropsById[lot.CropId] = crop;
             }
         }
 
-        var request = new ForecastRequest(
+        return new ForecastRequest(
             model,
             cropsById,
             new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather),
             new SetpointTemperature(model.Temperatures, model.Location, model.Zone),
-            now)
-        {
-            Horizon = Duration.FromHours(days * 24),
-            IncludeUncertainty = band,
-        };
-        return (model, request);
+            now);
     }
 
     // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.
@@ -133,8 +171,53 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             ?? throw new InvalidOperationException($"Stored forecast {record.Id} is empty.");
     }
 
+    /// <summary>The site with the stored rotations done added to its lots' <see cref="Lot.Rotations"/> (time order).</summary>
+    /// <remarks>A rotation done after its lot's <c>measuredOn</c> day is left out: the site's rules (SiteValidator.CheckLot)
+    /// take that date as the lot's "now" and would reject the whole forecast; measure the lot again (a grower edits the
+    /// lot's height and date) to bring later rotations in.</remarks>
+    public static Site WithRotationsDone(Site model, IReadOnlyList<RotationDoneRecord> done)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(done);
+        if (done.Count == 0 || model.Lots.IsDefaultOrEmpty)
+        {
+            return model;
+        }
+
+        var lots = model.Lots.Select(lot =>
+        {
+            Instant until = lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(model.Zone).ToInstant();
+            var extra = done.Where(r => r.LotId == lot.Id && r.At < until).Select(r => new RotationRecord(r.At, Core.Geometry.Angle.FromDegrees(r.AngleDeg))).ToList();
+            return extra.Count == 0
+                ? lot
+                : lot with { Rotations = [.. (lot.Rotations.IsDefault ? [] : lot.Rotations).Concat(extra).OrderBy(r => r.At)] };
+        });
+        return model with { Lots = [.. lots] };
+    }
+
+    /// <summary>The rotations done as hashed: one line per rotation (lot, instant, angle), in time order.</summary>
+    public static string RotationsDoneText(IReadOnlyList<RotationDoneRecord> done)
+    {
+        ArgumentNullException.ThrowIfNull(done);
+        var text = new StringBuilder();
+        foreach (RotationDoneRecord r in done.OrderBy(r => r.At).ThenBy(r => r.LotId, StringComparer.Ordinal).ThenBy(r => r.AngleDeg))
+        {
+            text.Append(r.LotId).Append(' ').Append(InstantPattern.ExtendedIso.Format(r.At)).Append(' ')
+                .Append(r.AngleDeg.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
+        }
+
+        return text.ToString();
+    }
+
     /// <summary>Lower-case hex SHA-256 of the forecast's inputs, each on its own labelled line.</summary>
-    public static string HashInputs(string siteJson, string cropLibraryVersion, Instant now, double days, bool band)
+    /// <param name="siteJson">The stored site file text.</param>
+    /// <param name="cropLibraryVersion">The crop library version.</param>
+    /// <param name="now">The start.</param>
+    /// <param name="days">The horizon, days.</param>
+    /// <param name="band">Whether the band is included.</param>
+    /// <param name="rotationsDone">The stored rotations done (<see cref="RotationsDoneText"/>); empty adds nothing, so
+    /// hashes of sites without any stay as they were.</param>
+    public static string HashInputs(string siteJson, string cropLibraryVersion, Instant now, double days, bool band, string rotationsDone = "")
     {
         ArgumentNullException.ThrowIfNull(siteJson);
         var text = new StringBuilder();
@@ -145,6 +228,10 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         text.Append("days ").Append(days.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
         text.Append("band ").Append(band ? "yes" : "no").Append('\n');
         text.Append("site ").Append(siteJson.Length.ToString(CultureInfo.InvariantCulture)).Append('\n').Append(siteJson);
+        if (!string.IsNullOrEmpty(rotationsDone))
+        {
+            text.Append("\nrotations-done ").Append(rotationsDone.Length.ToString(CultureInfo.InvariantCulture)).Append('\n').Append(rotationsDone);
+        }
         return Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(text.ToString())));
     }
 
@@ -174,9 +261,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             b.Uncertainty is LeanUncertainty u
                 ? new LeanBandView(R(u.Low.Degrees, 2), R(u.High.Degrees, 2), [.. u.Drivers.Select(d => d.Key)])
                 : null,
-            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))],
-            [.. b.LeanTrack.Where(s => s.At >= forecast.Now).Select(s => new LeanTrackPointView(Local(s.At), R(s.Tilt.Degrees, 2), R(s.Azimuth.Degrees, 1)))],
-            [.. b.PointLeansAtHorizon.Select(l => R(l.Tilt.Degrees, 2))]))
+            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))]))
             .ToList();
         string daylight = model.Structure is IndoorRoom
             ? "none (indoor room)"

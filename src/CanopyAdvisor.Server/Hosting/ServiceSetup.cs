@@ -44,6 +44,10 @@ internal static class ServiceSetup
         });
         services.AddSingleton<CropCatalogue>();
         services.AddSingleton<ForecastRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.PlanRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.LampsRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.CalibrationRunner>();
+        services.AddSingleton<CanopyAdvisor.Server.Advice.OutlookRunner>();
         services.AddSingleton<DemoSeeder>();
         services.AddHostedService<StoreStartup>();
         services.AddCanopyJobs();
@@ -105,6 +109,8 @@ internal static class ServiceSetup
         app.MapCropsApi();
         app.MapMapsApi();
         app.MapJobsApi();
+        app.MapGrowerRecordsApi();
+        app.MapAdviceApi();
         app.MapWebPages();
         return app;
     }

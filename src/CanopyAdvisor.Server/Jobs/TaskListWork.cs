@@ -27,7 +27,7 @@ internal sealed class TaskListWork(ForecastRunner runner) : ISiteJobWork
     public async Task<JobResult> RunAsync(SiteRecord site, Instant scheduledFor, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(site);
-        (Site model, ForecastRequest request) = runner.BuildRequest(site, scheduledFor, 7, band: false);
+        (Site model, ForecastRequest request) = await runner.BuildRequestAsync(site, scheduledFor, 7, band: false, cancellationToken);
         Instant lastSale = model.Lots.Max(l => l.SaleOn.AtStartOfDayInZone(model.Zone).ToInstant());
         Duration toSale = lastSale - scheduledFor;
         Duration horizon = toSale > MaximumPlanHorizon ? MaximumPlanHorizon : toSale < MinimumPlanHorizon ? MinimumPlanHorizon : toSale;

@@ -21,7 +21,7 @@ internal sealed class WeeklyOutlookWork(ForecastRunner runner, ICanopyStore stor
     public async Task<JobResult> RunAsync(SiteRecord site, Instant scheduledFor, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(site);
-        (Site model, ForecastRequest request) = runner.BuildRequest(site, scheduledFor, 7, band: true);
+        (Site model, ForecastRequest request) = await runner.BuildRequestAsync(site, scheduledFor, 7, band: true, cancellationToken);
         JobRunRecord? previous = await store.JobRuns.LatestWithOutputAsync(site.OrganisationId, site.Id, Kind, cancellationToken);
         string? previousSnapshot = previous?.Output is { } output ? Read(output).Snapshot : null;
         PreviousOutlook earlier = PreviousOutlook.Resolve(previousSnapshot, "the previous stored outlook", model.Id, scheduledFor);

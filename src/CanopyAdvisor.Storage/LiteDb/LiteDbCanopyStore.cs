@@ -66,6 +66,9 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         SiteCollection = _db.GetCollection<SiteDocument>("sites");
         ForecastCollection = _db.GetCollection<ForecastDocument>("forecasts");
         JobRunCollection = _db.GetCollection<JobRunDocument>("jobRuns");
+        ObservationCollection = _db.GetCollection<ObservationDocument>("observations");
+        RotationDoneCollection = _db.GetCollection<RotationDoneDocument>("rotationsDone");
+        CropVariantCollection = _db.GetCollection<CropVariantDocument>("cropVariants");
 
         UserCollection.EnsureIndex(u => u.Email, unique: true);
         UserCollection.EnsureIndex(u => u.OrganisationId);
@@ -77,6 +80,9 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         ForecastCollection.EnsureIndex(f => f.SiteId);
         JobRunCollection.EnsureIndex(j => j.SiteKind);
         JobRunCollection.EnsureIndex(j => j.SiteId);
+        ObservationCollection.EnsureIndex(o => o.SiteId);
+        RotationDoneCollection.EnsureIndex(r => r.SiteId);
+        CropVariantCollection.EnsureIndex(v => v.OrganisationId);
 
         Organisations = new OrganisationRepository(this);
         Users = new UserRepository(this);
@@ -84,6 +90,9 @@ public sealed class LiteDbCanopyStore : ICanopyStore
         Sites = new SiteRepository(this);
         Forecasts = new ForecastRepository(this);
         JobRuns = new JobRunRepository(this);
+        Observations = new ObservationRepository(this);
+        RotationsDone = new RotationDoneRepository(this);
+        CropVariants = new CropVariantRepository(this);
     }
 
     /// <inheritdoc />
@@ -104,6 +113,15 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     /// <inheritdoc />
     public IJobRunStore JobRuns { get; }
 
+    /// <inheritdoc />
+    public IObservationStore Observations { get; }
+
+    /// <inheritdoc />
+    public IRotationDoneStore RotationsDone { get; }
+
+    /// <inheritdoc />
+    public ICropVariantStore CropVariants { get; }
+
     internal ILiteCollection<OrganisationDocument> OrganisationCollection { get; }
 
     internal ILiteCollection<UserDocument> UserCollection { get; }
@@ -115,6 +133,12 @@ public sealed class LiteDbCanopyStore : ICanopyStore
     internal ILiteCollection<ForecastDocument> ForecastCollection { get; }
 
     internal ILiteCollection<JobRunDocument> JobRunCollection { get; }
+
+    internal ILiteCollection<ObservationDocument> ObservationCollection { get; }
+
+    internal ILiteCollection<RotationDoneDocument> RotationDoneCollection { get; }
+
+    internal ILiteCollection<CropVariantDocument> CropVariantCollection { get; }
 
     /// <inheritdoc />
     public Task<WriteOutcome> AddOrganisationAsync(

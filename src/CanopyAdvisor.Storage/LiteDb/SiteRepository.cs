@@ -70,6 +70,8 @@ internal sealed class SiteRepository(LiteDbCanopyStore store) : ISiteStore
 
             store.ForecastCollection.DeleteMany(f => f.SiteId == id);
             store.JobRunCollection.DeleteMany(j => j.SiteId == id);
+            store.ObservationCollection.DeleteMany(o => o.SiteId == id);
+            store.RotationDoneCollection.DeleteMany(r => r.SiteId == id);
             store.SiteCollection.Delete(id);
             return true;
         }));
