@@ -64,11 +64,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
         }
 
         Site model = loaded.Model;
-        ForecastRequest request = RequestFor(loaded, now) with
-        {
-            Horizon = Duration.FromHours(days * 24),
-            IncludeUncertainty = band,
-        };
+        ForecastRequest request = RequestFor(loaded, now, days, band);
 
         // Validation inside Prepare throws InvalidInputException (unknown crops, lots on unknown benches): a 400, nothing stored.
         SiteForecast forecast = await Task.Run(() => ForecastSession.Prepare(request).Run(cancellationToken: cancellationToken), cancellationToken);
@@ -87,13 +83,15 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
     {
         ArgumentNullException.ThrowIfNull(site);
         LoadedSite loaded = await LoadAsync(site, cancellationToken);
-        ForecastRequest request = RequestFor(loaded, now) with
+        return (loaded.Model, RequestFor(loaded, now, days, band));
+    }
+
+    private static ForecastRequest RequestFor(LoadedSite loaded, Instant now, double days, bool band) =>
+        RequestFor(loaded, now) with
         {
             Horizon = Duration.FromHours(days * 24),
             IncludeUncertainty = band,
         };
-        return (loaded.Model, request);
-    }
 
     /// <summary>The start of a forecast or plan: the ISO-8601 time given (with an offset), or the start of the current
     /// hour; a bad time adds an error at <c>now</c>.</summary>
@@ -261,7 +259,9 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             b.Uncertainty is LeanUncertainty u
                 ? new LeanBandView(R(u.Low.Degrees, 2), R(u.High.Degrees, 2), [.. u.Drivers.Select(d => d.Key)])
                 : null,
-            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))]))
+            [.. b.Flags.Select(f => new FlagView(f.Kind == ForecastFlagKind.Leggy ? "leggy" : "leaning", f.Cause, R(f.Value, 2), R(f.Limit, 2), f.Unit))],
+            [.. b.LeanTrack.Where(s => s.At >= forecast.Now).Select(s => new LeanTrackPointView(Local(s.At), R(s.Tilt.Degrees, 2), R(s.Azimuth.Degrees, 1)))],
+            [.. b.PointLeansAtHorizon.Select(l => R(l.Tilt.Degrees, 2))]))
             .ToList();
         string daylight = model.Structure is IndoorRoom
             ? "none (indoor room)"
