@@ -52,6 +52,6 @@ public static class RotationPlanning
         ArgumentNullException.ThrowIfNull(request);
         ForecastSession session = ForecastSession.Prepare(request with { IncludeUncertainty = false });
         RotationPlan plan = RotationPolicyPlanner.Plan(session, options, progress, cancellationToken);
-        return (plan, RotationCalendar.Schedule(request.Site, plan));
+        return (plan, RotationCalendar.Schedule(request.Site, plan, request.RotationsDone));
     }
 }

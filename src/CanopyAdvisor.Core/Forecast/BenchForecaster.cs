@@ -152,7 +152,9 @@ public static class BenchForecaster
             Math.Max(MinimumStartHeightM, parameters.GrowthZoneLengthM),
             HeightAt(timeline.Edges[firstEdge]));
 
-        ImmutableArray<RotationRecord> done = lot.Lot.Rotations.IsDefault ? [] : lot.Lot.Rotations;
+        ImmutableArray<RotationRecord> done = [
+            .. lot.Lot.Rotations.IsDefault ? [] : lot.Lot.Rotations,
+            .. request.RotationsDone.TryGetValue(lot.Lot.Id, out ImmutableArray<RotationRecord> recorded) && !recorded.IsDefault ? recorded : []];
         ImmutableArray<RotationRecord> rotations =
             [.. done.Where(r => r.At < now).Concat(planned.IsDefault ? [] : planned.Where(r => r.At >= now)).OrderBy(r => r.At)];
         var run = new BenchRun(field, timeline, firstEdge, rotations, parameters.NutationPeriod);
@@ -499,6 +501,40 @@ public static class BenchForecaster
             Instant measured = lot.MeasuredOn.At(new LocalTime(12, 0)).InZoneLeniently(zone).ToInstant();
             Instant sale = lot.SaleOn.AtStartOfDayInZone(zone).ToInstant();
             lots.Add(new LotPlan(lot, crop, benchIndex, Min(start, request.Now), measured, sale));
+        }
+
+        ImmutableDictionary<string, ImmutableArray<RotationRecord>> recordedDone = request.RotationsDone ?? ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;
+        foreach ((string lotId, ImmutableArray<RotationRecord> rotations) in recordedDone.OrderBy(p => p.Key, StringComparer.Ordinal))
+        {
+            string path = $"rotationsDone.{lotId}";
+            Lot? owner = siteLots.FirstOrDefault(l => l is not null && l.Id == lotId);
+            if (owner is null || zone is null)
+            {
+                errors.Add(new ValidationError(path, $"no lot '{lotId}' on the site"));
+                continue;
+            }
+
+            Instant planted = owner.PlantedOn.AtStartOfDayInZone(zone).ToInstant();
+            for (int k = 0; k < (rotations.IsDefault ? 0 : rotations.Length); k++)
+            {
+                RotationRecord? r = rotations[k];
+                if (r is null)
+                {
+                    errors.Add(new ValidationError($"{path}[{k}]", "is required"));
+                    continue;
+                }
+
+                if (r.At < planted || r.At > request.Now)
+                {
+                    errors.Add(new ValidationError($"{path}[{k}].at", $"{r.At} is outside the lot's life so far ({planted} … now {request.Now})"));
+                }
+
+                double degrees = r.Angle.Degrees;
+                if (!double.IsFinite(degrees) || degrees <= -360 || degrees >= 360 || degrees == 0)
+                {
+                    errors.Add(new ValidationError($"{path}[{k}].angleDeg", "must be within (−360, 360) and not 0"));
+                }
+            }
         }
 
         ImmutableDictionary<string, ImmutableArray<RotationRecord>> planned = request.PlannedRotations ?? ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;

@@ -70,6 +70,13 @@ public sealed record ForecastRequest(
     public ImmutableDictionary<string, ImmutableArray<RotationRecord>> PlannedRotations { get; init; } =
         ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;
 
+    /// <summary>Pot rotations already done that are recorded outside the site's lots (for example ticked off in the
+    /// service), by lot id: each from the start of the lot's planting date up to now, in any order. They join the lots'
+    /// own <see cref="Lot.Rotations"/>; unlike those, which a site file may list only up to the lot's measurement date,
+    /// these are judged against the forecast start, so a turn done today counts today.</summary>
+    public ImmutableDictionary<string, ImmutableArray<RotationRecord>> RotationsDone { get; init; } =
+        ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty;
+
     /// <summary>How errors name the parts of the site (the site file reader passes its own); <see cref="SitePaths.Default"/> when null.</summary>
     public SitePaths? Paths { get; init; }
 }

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
@@ -122,7 +123,7 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
     {
         ArgumentNullException.ThrowIfNull(site);
         IReadOnlyList<RotationDoneRecord> done = await store.RotationsDone.ListAsync(site.OrganisationId, site.Id, cancellationToken);
-        Site model = WithRotationsDone(new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null), done);
+        Site model = new SiteFileReader(ServerBeamFactory.Instance).Parse(site.Json, "site", baseDirectory: null);
         if (model.Lots.IsDefaultOrEmpty)
         {
             throw new InvalidInputException("lots", "the site has no crop lots to forecast; add a \"lots\" section");
@@ -152,7 +153,10 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             cropsById,
             new ClearSkyOutsideLight(model.Location, model.Zone, model.Weather),
             new SetpointTemperature(model.Temperatures, model.Location, model.Zone),
-            now);
+            now)
+        {
+            RotationsDone = RotationsDoneBefore(model, loaded.Done, now),
+        };
     }
 
     // Stored documents are read leniently: a forecast stored by an older build (with a member since dropped) still reads.
@@ -169,28 +173,22 @@ internal sealed class ForecastRunner(ICanopyStore store, CropCatalogue crops, IC
             ?? throw new InvalidOperationException($"Stored forecast {record.Id} is empty.");
     }
 
-    /// <summary>The site with the stored rotations done added to its lots' <see cref="Lot.Rotations"/> (time order).</summary>
-    /// <remarks>A rotation done after its lot's <c>measuredOn</c> day is left out: the site's rules (SiteValidator.CheckLot)
-    /// take that date as the lot's "now" and would reject the whole forecast; measure the lot again (a grower edits the
-    /// lot's height and date) to bring later rotations in.</remarks>
-    public static Site WithRotationsDone(Site model, IReadOnlyList<RotationDoneRecord> done)
+    /// <summary>The stored rotations done before <paramref name="now"/>, by lot, as the forecast takes them
+    /// (<see cref="ForecastRequest.RotationsDone"/>: judged against the forecast start, so a turn ticked off today counts
+    /// today); turns recorded for lots the site no longer has are left out.</summary>
+    public static ImmutableDictionary<string, ImmutableArray<RotationRecord>> RotationsDoneBefore(
+        Site model, IReadOnlyList<RotationDoneRecord> done, Instant now)
     {
         ArgumentNullException.ThrowIfNull(model);
         ArgumentNullException.ThrowIfNull(done);
-        if (done.Count == 0 || model.Lots.IsDefaultOrEmpty)
-        {
-            return model;
-        }
-
-        var lots = model.Lots.Select(lot =>
-        {
-            Instant until = lot.MeasuredOn.PlusDays(1).AtStartOfDayInZone(model.Zone).ToInstant();
-            var extra = done.Where(r => r.LotId == lot.Id && r.At < until).Select(r => new RotationRecord(r.At, Core.Geometry.Angle.FromDegrees(r.AngleDeg))).ToList();
-            return extra.Count == 0
-                ? lot
-                : lot with { Rotations = [.. (lot.Rotations.IsDefault ? [] : lot.Rotations).Concat(extra).OrderBy(r => r.At)] };
-        });
-        return model with { Lots = [.. lots] };
+        var lots = (model.Lots.IsDefault ? [] : model.Lots).Select(l => l.Id).ToHashSet(StringComparer.Ordinal);
+        return done
+            .Where(r => r.At < now && lots.Contains(r.LotId))
+            .GroupBy(r => r.LotId, StringComparer.Ordinal)
+            .ToImmutableDictionary(
+                g => g.Key,
+                g => g.OrderBy(r => r.At).Select(r => new RotationRecord(r.At, Core.Geometry.Angle.FromDegrees(r.AngleDeg))).ToImmutableArray(),
+                StringComparer.Ordinal);
     }
 
     /// <summary>The rotations done as hashed: one line per rotation (lot, instant, angle), in time order.</summary>

@@ -36,7 +36,7 @@ internal sealed class TaskListWork(ForecastRunner runner) : ISiteJobWork
             {
                 ForecastSession planning = ForecastSession.Prepare(request with { Horizon = horizon, IncludeUncertainty = false });
                 RotationPlan plan = RotationPolicyPlanner.Plan(planning, RotationPolicyOptions.Default, cancellationToken: cancellationToken);
-                return RotationCalendar.Schedule(model, plan);
+                return RotationCalendar.Schedule(model, plan, request.RotationsDone);
             },
             cancellationToken);
         LocalDate today = scheduledFor.InZone(model.Zone).Date;

@@ -156,4 +156,34 @@ public class ForecastSessionTests
         var error = Assert.Throws<InvalidInputException>(() => session.RunLot("lot-south", new LotScenario { Crop = broken }));
         Assert.Contains(error.Errors, e => e.Path.StartsWith("crop.", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void A_turn_recorded_today_after_the_measurement_day_counts()
+    {
+        // The lot was measured at WinterNow's date; a half turn done two hours before now, recorded outside the site,
+        // flips the lean toward the bright side round (common practice: turning straightens a leaning bench).
+        ImmutableArray<RotationRecord> done = [new RotationRecord(WinterNow - Duration.FromHours(2), Angle.FromDegrees(180))];
+        BenchForecast none = Assert.Single(Session(SouthBench).Run().Benches);
+        BenchForecast turned = Assert.Single(Session(SouthBench, r => r with
+        {
+            RotationsDone = ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty.Add("lot-south", done),
+        }).Run().Benches);
+
+        Assert.True(BearingDifferenceDeg(none.LeanNow.Azimuth, turned.LeanNow.Azimuth) > 90,
+            $"{none.LeanNow.Azimuth.Degrees:0}° vs {turned.LeanNow.Azimuth.Degrees:0}°");
+    }
+
+    [Theory]
+    [InlineData("a turn recorded in the future is not done yet", 2, 180, "rotationsDone.lot-south[0].at")]
+    [InlineData("a turn before planting (the lot was planted 30 days before now)", -31 * 24, 180, "rotationsDone.lot-south[0].at")]
+    [InlineData("a zero turn is no rotation", -2, 0, "rotationsDone.lot-south[0].angleDeg")]
+    public void Bad_recorded_turns_are_rejected_with_their_path(string label, int hours, double angleDeg, string path)
+    {
+        ImmutableArray<RotationRecord> done = [new RotationRecord(WinterNow + Duration.FromHours(hours), Angle.FromDegrees(angleDeg))];
+        var error = Assert.Throws<InvalidInputException>(() => Session(SouthBench, r => r with
+        {
+            RotationsDone = ImmutableDictionary<string, ImmutableArray<RotationRecord>>.Empty.Add("lot-south", done),
+        }));
+        Assert.True(error.Errors.Any(e => e.Path == path), $"{label}: {string.Join("; ", error.Errors)}");
+    }
 }

@@ -176,4 +176,26 @@ public sealed class GrowerRecordsApiTests(CanopyFactory factory) : IClassFixture
         Assert.Equal(HttpStatusCode.OK, third.StatusCode);
         Assert.Equal(a.GetProperty("id").GetString(), (await third.Content.ReadFromJsonAsync<JsonElement>()).GetProperty("id").GetString());
     }
+
+    [Fact]
+    public async Task A_rotation_done_today_after_the_lots_measurement_day_counts_in_todays_forecast()
+    {
+        // The demo lots were measured on 2026-12-01 (demo data); a turn ticked off at 01:00 on 12-02 (the test clock reads
+        // 02:00 in Chicago) is judged against the forecast's start, not the measurement day, and turns the lean.
+        const string options = """{"now": "2026-12-02T02:00:00-06:00", "days": 1, "includeBand": false}""";
+        (HttpClient grower, string siteId) = await AsAsync(Demo.Grower);
+        JsonElement a = await (await grower.PostAsync($"/api/sites/{siteId}/forecasts", SiteEditing.Json(options))).Content.ReadFromJsonAsync<JsonElement>();
+
+        HttpResponseMessage added = await grower.PostAsync($"/api/sites/{siteId}/rotations-done", SiteEditing.Json("""{"benchId": "rack-a-tier-2", "at": "2026-12-02T01:00:00-06:00", "angleDeg": 180}"""));
+        Assert.Equal(HttpStatusCode.Created, added.StatusCode);
+        HttpResponseMessage second = await grower.PostAsync($"/api/sites/{siteId}/forecasts", SiteEditing.Json(options));
+        JsonElement b = await second.Content.ReadFromJsonAsync<JsonElement>();
+        Assert.True(second.StatusCode == HttpStatusCode.Created, b.GetRawText());
+
+        JsonElement Bench(JsonElement f, string id) => f.GetProperty("benches").EnumerateArray().Single(x => x.GetProperty("benchId").GetString() == id);
+        // A half turn flips the lean's direction (common practice): the lean at the horizon moves.
+        Assert.NotEqual(
+            Bench(a, "rack-a-tier-2").GetProperty("leanAtHorizonDeg").GetDouble(),
+            Bench(b, "rack-a-tier-2").GetProperty("leanAtHorizonDeg").GetDouble());
+    }
 }
