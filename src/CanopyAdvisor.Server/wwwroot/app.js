@@ -234,9 +234,25 @@ async function latestForecast(siteId) {
   return api("GET", `/api/sites/${encodeURIComponent(siteId)}/forecasts/${encodeURIComponent(list[0].id)}`);
 }
 
+// The forecast's flag causes in words (the API keeps the codes).
+const CAUSE_WORDS = {
+  lowDli: "low daily light",
+  lowPhytochromeState: "low red : far-red",
+  highDif: "warm days over cool nights",
+  heightOverGrade: "height at sale",
+  leanOverGrade: "lean over the grade limit",
+};
+
+const UNIT_WORDS = { "mol m-2 d-1": "mol m⁻² d⁻¹", deg: "°", "1": "" };
+
 function flagsCell(flags) {
   if (!flags || !flags.length) return el("span", { class: "none", text: "none" });
-  return flags.map(f => el("span", { class: "flag", title: `${f.kind}: ${f.cause}`, text: `${f.kind} (${f.cause}: ${fmt(f.value, 1)} ${f.unit}, limit ${fmt(f.limit, 1)})` }));
+  return flags.map(f => {
+    const cause = CAUSE_WORDS[f.cause] || f.cause;
+    const unit = f.unit in UNIT_WORDS ? UNIT_WORDS[f.unit] : ` ${f.unit}`;
+    const sep = unit.startsWith(" ") || unit === "" || unit === "°" ? "" : " ";
+    return el("span", { class: "flag", title: `${f.kind}: ${f.cause}`, text: `${f.kind}: ${cause} ${fmt(f.value, 1)}${sep}${unit}, limit ${fmt(f.limit, 1)}${sep}${unit}` });
+  });
 }
 
 async function sitePage(siteId) {
