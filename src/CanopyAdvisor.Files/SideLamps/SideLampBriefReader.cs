@@ -68,24 +68,7 @@ public sealed class SideLampBriefReader
         ArgumentNullException.ThrowIfNull(json);
         ArgumentNullException.ThrowIfNull(sourceName);
         ArgumentNullException.ThrowIfNull(site);
-        JsonDocument document;
-        try
-        {
-            document = JsonDocument.Parse(json.AsMemory(json.StartsWith('\uFEFF') ? 1 : 0), new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Disallow, AllowTrailingCommas = false });
-        }
-        catch (JsonException e)
-        {
-            long line = (e.LineNumber ?? 0) + 1;
-            long column = (e.BytePositionInLine ?? 0) + 1;
-            string message = e.Message;
-            int cut = message.IndexOf(" LineNumber:", StringComparison.Ordinal);
-            if (cut > 0)
-            {
-                message = message[..cut];
-            }
-
-            throw new InvalidInputException($"{sourceName}:{line}", $"malformed JSON at line {line}, byte {column}: {message}");
-        }
+        JsonDocument document = JsonObjectReader.ParseDocument(json, sourceName);
 
         var errors = new List<ValidationError>();
         SideLampBrief? brief;

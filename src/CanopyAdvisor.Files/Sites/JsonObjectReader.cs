@@ -12,6 +12,32 @@ namespace CanopyAdvisor.Files.Sites;
 /// </remarks>
 internal sealed partial class JsonObjectReader
 {
+    /// <summary>Parses a JSON file's text strictly (no comments, no trailing commas; a leading byte-order mark, left by
+    /// some editors, is skipped).</summary>
+    /// <param name="json">The text.</param>
+    /// <param name="sourceName">Name of the text's origin for the malformed-JSON message (e.g. the file name).</param>
+    /// <exception cref="InvalidInputException">The text is not JSON: the message names the line and byte.</exception>
+    public static JsonDocument ParseDocument(string json, string sourceName)
+    {
+        try
+        {
+            return JsonDocument.Parse(json.AsMemory(json.StartsWith('\uFEFF') ? 1 : 0), new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Disallow, AllowTrailingCommas = false });
+        }
+        catch (JsonException e)
+        {
+            long line = (e.LineNumber ?? 0) + 1;
+            long column = (e.BytePositionInLine ?? 0) + 1;
+            string message = e.Message;
+            int cut = message.IndexOf(" LineNumber:", StringComparison.Ordinal);
+            if (cut > 0)
+            {
+                message = message[..cut];
+            }
+
+            throw new InvalidInputException($"{sourceName}:{line}", $"malformed JSON at line {line}, byte {column}: {message}");
+        }
+    }
+
     private readonly Dictionary<string, JsonElement> properties = new(StringComparer.Ordinal);
     private readonly List<string> order = [];
     private readonly HashSet<string> known = new(StringComparer.Ordinal);
